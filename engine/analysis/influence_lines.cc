@@ -3,6 +3,7 @@
 #include <algorithm>
 #include <array>
 #include <cassert>
+#include <cmath>
 
 namespace tenthpoint::analysis {
 namespace {
@@ -93,6 +94,16 @@ const SupportInfluenceLines* InfluenceLines::support(std::size_t support_line) c
   return nullptr;
 }
 
+Real point_load_ordinate(const PiecewiseCubic& curve, ShearSide side, Real section, Real x, Real tolerance) {
+  if (side == ShearSide::none || std::abs(x - section) > tolerance) return curve.value(x);
+  // A cut beyond either end of the girder carries nothing.
+  if (curve.empty() || (side == ShearSide::left && section <= curve.start() + tolerance) ||
+      (side == ShearSide::right && section >= curve.end() - tolerance)) {
+    return 0.0;
+  }
+  return side == ShearSide::right ? curve.right_limit(section) - 1.0 : curve.left_limit(section) + 1.0;
+}
+
 // Element end forces are f = k u + (fixed-end forces). At a node with an
 // element R to its right and L to its left (nodes and elements alternate):
 //   M  = -m1(R) = +m2(L)  (sagging moment: clockwise on a left face),
@@ -105,6 +116,7 @@ InfluenceLines compute_influence_lines(const LineGirderModel& model, const Influ
   out.bridge_id = model.bridge_id();
   out.length = model.length();
   out.points = model.analysis_points();
+  out.support_lines = model.layout().supports.size();
   out.at_points.resize(out.points.size());
 
   const auto& elements = model.elements();

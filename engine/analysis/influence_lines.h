@@ -21,10 +21,11 @@
 // point has two shear curves: shear_left (on a cut just left of the point)
 // and shear_right (just right). They differ as functions only at a support,
 // where shear_right - shear_left is the reaction; elsewhere they are the same
-// curve. At the section itself the curve has a jump; for a load standing
-// exactly there, shear_left takes the right limit and shear_right the left
-// limit (the load is on the other side of each cut). Outside the girder's ends
-// the shear is zero.
+// curve. At the section itself the curve jumps by +1 (moving right); a load
+// standing exactly at the section is on the far side of each cut, so its
+// ordinate is right_limit - 1 for shear_right and left_limit + 1 for
+// shear_left (point_load_ordinate applies this rule). Beyond the girder's
+// ends the shear is zero.
 //
 // Method (Maxwell-Betti / Mueller-Breslau). For an effect E = c^T u + (local
 // end-force terms of the element that defines E), solve K z = c once; the
@@ -73,10 +74,19 @@ struct InfluenceLines {
   std::vector<AnalysisPoint> points;
   std::vector<PointInfluenceLines> at_points;   // parallel to points
   std::vector<SupportInfluenceLines> supports;  // restrained support lines only, left to right
+  std::size_t support_lines = 0;                // all support lines, free ones included
 
   // Reaction curves of a support line; nullptr for a free one.
   [[nodiscard]] const SupportInfluenceLines* support(std::size_t support_line) const;
 };
+
+enum class ShearSide { none, left, right };
+
+// Ordinate of `curve` for a unit load at x: curve.value(x), except for a shear
+// curve (side left or right) with the load exactly at its own section
+// (|x - section| <= tolerance), where the rule above applies.
+[[nodiscard]] Real point_load_ordinate(const PiecewiseCubic& curve, ShearSide side, Real section, Real x,
+                                       Real tolerance);
 
 [[nodiscard]] InfluenceLines compute_influence_lines(const LineGirderModel& model,
                                                      const InfluenceLineOptions& options = {});
