@@ -9,6 +9,7 @@
 #pragma once
 
 #include <string>
+#include <utility>
 #include <vector>
 
 #include "engine/core/numeric.h"
@@ -28,6 +29,9 @@ struct ConcentratedLoad {
 };
 
 struct DeadLoadCase {
+  DeadLoadCase() = default;
+  explicit DeadLoadCase(std::string case_name) : name(std::move(case_name)) {}
+
   std::string name;
   Real uniform = 0;  // N/m over the whole girder, downward positive
   std::vector<DistributedLoad> distributed;
