@@ -29,7 +29,8 @@ void DeckLayout::add_concrete(TransformedSection& section, Real deck_ratio) cons
 
 bool DeckLayout::add_bars(TransformedSection& section, Real bar_ratio) const {
   // Bar depths are measured down from the top of the deck (model::DeckSlab).
-  for (const model::BarLayer& bars : deck_.longitudinal_bars) section.add_area(bars.area, top() - bars.depth, bar_ratio);
+  for (const model::BarLayer& bars : deck_.longitudinal_bars)
+    section.add_area(bars.area, top() - bars.depth, bar_ratio);
   return !deck_.longitudinal_bars.empty();
 }
 

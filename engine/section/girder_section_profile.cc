@@ -114,8 +114,8 @@ std::optional<StiffnessProfile> GirderSectionProfile::cracked_negative_stiffness
       std::shared_ptr<const TaperedSection> tapered = pieces_[i].tapered;
       if (!tapered->cracked_negative_rigidity(tapered->start_station())) return std::nullopt;
       // Both ends have a cracked section, so every interior station has one.
-      p.flexural_rigidity = std::function<Real(Real)>(
-          [tapered](Real station) { return *tapered->cracked_negative_rigidity(station); });
+      p.flexural_rigidity =
+          std::function<Real(Real)>([tapered](Real station) { return *tapered->cracked_negative_rigidity(station); });
     }
     profile.pieces.push_back(std::move(p));
   }

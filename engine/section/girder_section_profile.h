@@ -51,9 +51,9 @@ class GirderSectionProfile {
 
  private:
   struct Piece {
-    std::optional<SectionStages> prismatic;          // set for a prismatic segment
-    std::shared_ptr<const TaperedSection> tapered;   // set for a haunched segment
-    std::optional<Real> prismatic_depth;             // m, when the section has a description
+    std::optional<SectionStages> prismatic;         // set for a prismatic segment
+    std::shared_ptr<const TaperedSection> tapered;  // set for a haunched segment
+    std::optional<Real> prismatic_depth;            // m, when the section has a description
   };
 
   const Piece& piece_at(Real station, Side side) const;

@@ -28,12 +28,12 @@
 namespace tenthpoint::section {
 
 struct ModularRatios {
-  Real girder_modulus = 0;            // Pa, the reference material of every stage
-  std::optional<Real> deck_modulus;   // Pa; absent when n was given or the bridge is not composite
-  std::optional<Real> short_term;     // n; composite bridges only
-  std::optional<Real> long_term;      // k*n (steel) or n (concrete); composite bridges only
-  std::optional<Real> bar_ratio;      // E_bar / E_girder; absent when no modulus for the bars is known
-  bool short_term_given = false;      // true when n came from materials.modular_ratio
+  Real girder_modulus = 0;           // Pa, the reference material of every stage
+  std::optional<Real> deck_modulus;  // Pa; absent when n was given or the bridge is not composite
+  std::optional<Real> short_term;    // n; composite bridges only
+  std::optional<Real> long_term;     // k*n (steel) or n (concrete); composite bridges only
+  std::optional<Real> bar_ratio;     // E_bar / E_girder; absent when no modulus for the bars is known
+  bool short_term_given = false;     // true when n came from materials.modular_ratio
 };
 
 // Throws InputError naming the materials field that is missing or not

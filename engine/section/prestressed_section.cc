@@ -24,8 +24,7 @@ StageProperties PrestressedSection::noncomposite(Real girder_modulus) const {
   return StageProperties::from_transformed(s, girder_modulus, girder_.height);
 }
 
-StageProperties PrestressedSection::composite(const model::DeckSlab& deck, Real deck_ratio,
-                                              Real girder_modulus) const {
+StageProperties PrestressedSection::composite(const model::DeckSlab& deck, Real deck_ratio, Real girder_modulus) const {
   const DeckLayout layout(deck, girder_.height, context_);
   TransformedSection s;
   s.add_part(girder_.area, girder_.centroid_from_bottom, girder_.inertia);

@@ -69,8 +69,8 @@ Real solve_on_interval(const Outline& o, const std::vector<TransformedBar>& bars
   // f is increasing on the interval, so the root is the larger one; the
   // second form avoids cancellation when beta > 0.
   const Real discriminant = std::max(Real{0}, beta * beta - 4 * alpha * gamma);
-  const Real root = beta > 0 ? -2 * gamma / (beta + std::sqrt(discriminant))
-                             : (-beta + std::sqrt(discriminant)) / (2 * alpha);
+  const Real root =
+      beta > 0 ? -2 * gamma / (beta + std::sqrt(discriminant)) : (-beta + std::sqrt(discriminant)) / (2 * alpha);
   return std::clamp(root, lo, hi);
 }
 
@@ -84,21 +84,21 @@ ReinforcedConcreteSection::ReinforcedConcreteSection(const model::ReinforcedConc
   context_.require_nonnegative(beam.flange_thickness, "rc_beam.flange_thickness");
   if (beam.flange_thickness > 0) {
     if (!(beam.flange_thickness < beam.height)) {
-      context_.fail("rc_beam.flange_thickness",
-                    fmt::format("must be less than the height {:g} m (got {:g} m)", beam.height, beam.flange_thickness));
+      context_.fail("rc_beam.flange_thickness", fmt::format("must be less than the height {:g} m (got {:g} m)",
+                                                            beam.height, beam.flange_thickness));
     }
     if (!(beam.flange_width >= beam.web_width)) {
-      context_.fail("rc_beam.flange_width",
-                    fmt::format("must be at least the web width {:g} m (got {:g} m)", beam.web_width, beam.flange_width));
+      context_.fail("rc_beam.flange_width", fmt::format("must be at least the web width {:g} m (got {:g} m)",
+                                                        beam.web_width, beam.flange_width));
     }
   }
   auto check_layers = [&](const std::vector<model::BarLayer>& layers, const char* name) {
     for (std::size_t i = 0; i < layers.size(); ++i) {
       context_.require_positive(layers[i].area, fmt::format("rc_beam.{}[{}].area", name, i));
       if (!(layers[i].depth > 0 && layers[i].depth < beam.height)) {
-        context_.fail(fmt::format("rc_beam.{}[{}].depth", name, i),
-                      fmt::format("must lie inside the beam, between 0 and {:g} m (got {:g} m)", beam.height,
-                                  layers[i].depth));
+        context_.fail(
+            fmt::format("rc_beam.{}[{}].depth", name, i),
+            fmt::format("must lie inside the beam, between 0 and {:g} m (got {:g} m)", beam.height, layers[i].depth));
       }
     }
   };
@@ -127,7 +127,8 @@ void ReinforcedConcreteSection::require_bar_ratio(Real bar_ratio) const {
   // Es / Ec is near 8 for ordinary concrete; at or below 1 the (n - 1) rule
   // would remove area, which means the moduli in the file are wrong.
   if (!(bar_ratio > 1) || !std::isfinite(bar_ratio)) {
-    context_.fail("rc_beam", fmt::format("bar modular ratio Es/Ec must exceed 1 (got {:g}); check materials", bar_ratio));
+    context_.fail("rc_beam",
+                  fmt::format("bar modular ratio Es/Ec must exceed 1 (got {:g}); check materials", bar_ratio));
   }
 }
 

@@ -123,9 +123,14 @@ void check_given(const model::ElasticSection& given, const detail::SectionContex
 const StageProperties& SectionStages::at(model::SectionStage stage) const {
   if (!composite) return noncomposite;
   switch (stage) {
-    case model::SectionStage::noncomposite: return noncomposite;
-    case model::SectionStage::long_term_composite: assert(long_term); return *long_term;
-    case model::SectionStage::short_term_composite: assert(short_term); return *short_term;
+    case model::SectionStage::noncomposite:
+      return noncomposite;
+    case model::SectionStage::long_term_composite:
+      assert(long_term);
+      return *long_term;
+    case model::SectionStage::short_term_composite:
+      assert(short_term);
+      return *short_term;
   }
   return noncomposite;
 }
@@ -173,7 +178,8 @@ SectionStages section_stages(const model::SectionDefinition& section, const mode
 
   SectionStages out;
   out.composite = composite;
-  out.noncomposite = *resolve(std::optional<model::ElasticSection>(given.noncomposite), "noncomposite", std::nullopt, true);
+  out.noncomposite =
+      *resolve(std::optional<model::ElasticSection>(given.noncomposite), "noncomposite", std::nullopt, true);
   if (composite) {
     out.long_term = resolve(given.long_term, "long_term", described ? described->long_term : std::nullopt, true);
     out.short_term = resolve(given.short_term, "short_term", described ? described->short_term : std::nullopt, true);

@@ -44,8 +44,8 @@ struct SectionStages {
 // Properties by the rules above. Throws InputError for a missing stage, a
 // description that does not match materials.kind, bad dimensions, or missing
 // materials.
-[[nodiscard]] SectionStages section_stages(const model::SectionDefinition& section,
-                                           const model::Materials& materials, const SectionOptions& options = {});
+[[nodiscard]] SectionStages section_stages(const model::SectionDefinition& section, const model::Materials& materials,
+                                           const SectionOptions& options = {});
 
 // Properties computed from the description alone, ignoring any given
 // `properties`. Throws InputError when the section has no description, or,

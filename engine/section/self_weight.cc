@@ -23,7 +23,8 @@ Real concrete_unit_weight(const std::optional<model::Concrete>& concrete, const 
 SelfWeight self_weight(const model::SectionDefinition& section, const model::Materials& materials,
                        const SelfWeightOptions& options) {
   const detail::SectionContext context{section.id, section.where};
-  if (!section.description) context.fail("properties", "a self-weight needs a steel_i, rc_beam or ps_girder description");
+  if (!section.description)
+    context.fail("properties", "a self-weight needs a steel_i, rc_beam or ps_girder description");
   context.require_positive(options.steel_unit_weight, "self_weight.steel_unit_weight");
 
   SelfWeight out;
@@ -44,8 +45,8 @@ SelfWeight self_weight(const model::SectionDefinition& section, const model::Mat
           top_width = beam.is_rectangle() ? d.web_width : d.flange_width;
         } else {
           const PrestressedSection girder(d, context);
-          out.girder = girder.area() *
-                       concrete_unit_weight(materials.girder_concrete, "materials.girder_concrete", context);
+          out.girder =
+              girder.area() * concrete_unit_weight(materials.girder_concrete, "materials.girder_concrete", context);
         }
       },
       *section.description);

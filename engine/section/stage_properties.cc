@@ -23,7 +23,8 @@ std::optional<Real> modulus_at(Real inertia, Real neutral_axis, Real height, Rea
 
 std::optional<Real> StageProperties::section_modulus_at(Real height) const {
   if (!neutral_axis) return std::nullopt;
-  const Real depth = std::max({std::abs(height), std::abs(*neutral_axis), girder_top.value_or(0), deck_top.value_or(0)});
+  const Real depth =
+      std::max({std::abs(height), std::abs(*neutral_axis), girder_top.value_or(0), deck_top.value_or(0)});
   return modulus_at(inertia, *neutral_axis, height, depth);
 }
 

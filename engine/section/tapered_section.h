@@ -77,7 +77,7 @@ class TaperedSection {
   model::Materials materials_;
   SectionOptions options_;
   SourceLocation where_;
-  SectionStages used_start_;       // the end stages as section_stages gives them
+  SectionStages used_start_;  // the end stages as section_stages gives them
   SectionStages used_end_;
   SectionStages described_start_;  // the end stages from the descriptions alone
   SectionStages described_end_;

@@ -32,8 +32,7 @@ TEST_CASE("Ec by the older 33000 wc^1.5 sqrt(f'c) form of LRFD 7th ed. Eq. 5.4.2
 TEST_CASE("K1 scales Ec linearly", "[section]") {
   // LRFD 5.4.2.4: Ec is proportional to K1.
   const double base = concrete_modulus(ksi(5.0), kcf(0.150), ConcreteModulusFormula::lrfd_9th, 1.0);
-  TP_CHECK_CLOSE(concrete_modulus(ksi(5.0), kcf(0.150), ConcreteModulusFormula::lrfd_9th, 0.9), 0.9 * base, 1e-12,
-                 0.0);
+  TP_CHECK_CLOSE(concrete_modulus(ksi(5.0), kcf(0.150), ConcreteModulusFormula::lrfd_9th, 0.9), 0.9 * base, 1e-12, 0.0);
 }
 
 TEST_CASE("Ec from SI inputs equals Ec from the same concrete in US inputs", "[section]") {

@@ -20,7 +20,9 @@ using test::ksi;
 constexpr double kHand = 1e-9;
 const double kEc = test::ksi(3000.0);  // any positive modulus: these checks are geometric
 
-detail::SectionContext context(const char* id = "TB") { return detail::SectionContext{id, SourceLocation{"t.yaml", 7, 3}}; }
+detail::SectionContext context(const char* id = "TB") {
+  return detail::SectionContext{id, SourceLocation{"t.yaml", 7, 3}};
+}
 
 // The EV-0058 end-span T-beam: h = 39, bw = 16, b = 84, hf = 7 in; bottom bars
 // 6.24 in^2 at d = 35.6 and 3.12 in^2 at 32.8; top bars 1.40 in^2 at 2.0 in.
@@ -122,8 +124,7 @@ TEST_CASE("a T-beam whose neutral axis stays in the flange cracks like a rectang
   const double kd = (std::sqrt(2 * rho * n + rho * n * rho * n) - rho * n) * 35.6;
   REQUIRE(kd < 7.0);
   TP_CHECK_CLOSE(c.neutral_axis_depth, in(kd), kHand, 0.0);
-  TP_CHECK_CLOSE(c.properties.inertia, in4(84.0 * kd * kd * kd / 3 + n * 3.12 * (35.6 - kd) * (35.6 - kd)), kHand,
-                 0.0);
+  TP_CHECK_CLOSE(c.properties.inertia, in4(84.0 * kd * kd * kd / 3 + n * 3.12 * (35.6 - kd) * (35.6 - kd)), kHand, 0.0);
 }
 
 TEST_CASE("a top bar below the cracked neutral axis counts as tension steel n A", "[section]") {
@@ -139,8 +140,8 @@ TEST_CASE("a top bar below the cracked neutral axis counts as tension steel n A"
   const double depth = (-qb + std::sqrt(qb * qb - 4 * 42.0 * qc)) / (2 * 42.0);
   REQUIRE(depth < 6.0);
   TP_CHECK_CLOSE(c.neutral_axis_depth, in(depth), kHand, 0.0);
-  const double icr = 84.0 * depth * depth * depth / 3 + n * 3.12 * std::pow(35.6 - depth, 2) +
-                     n * 1.0 * std::pow(6.0 - depth, 2);
+  const double icr =
+      84.0 * depth * depth * depth / 3 + n * 3.12 * std::pow(35.6 - depth, 2) + n * 1.0 * std::pow(6.0 - depth, 2);
   TP_CHECK_CLOSE(c.properties.inertia, in4(icr), kHand, 0.0);
 }
 

@@ -25,7 +25,9 @@ constexpr double kHand = 1e-9;
 // catches a wrong plate or a missing flange.
 constexpr double kRolledShape = 0.03;
 
-detail::SectionContext context(const char* id = "S1") { return detail::SectionContext{id, SourceLocation{"t.yaml", 3, 5}}; }
+detail::SectionContext context(const char* id = "S1") {
+  return detail::SectionContext{id, SourceLocation{"t.yaml", 3, 5}};
+}
 
 // Textbook transformed-section table: rows of (A, y, Io), in consistent units.
 struct Row {
@@ -100,9 +102,8 @@ TEST_CASE("swapping the flanges mirrors the neutral axis and keeps the inertia",
 TEST_CASE("the noncomposite plate girder matches a hand transformed-section table", "[section]") {
   const StageProperties p = SteelISection(test::plate_girder_54(), context()).noncomposite(ksi(29000));
   // Hand computation (inches): bottom flange 16 x 1.25, web 54 x 0.4375, top 14 x 0.75.
-  const HandResult h = hand({{20.0, 0.625, 16 * 1.953125 / 12},
-                             {23.625, 28.25, 0.4375 * 157464.0 / 12},
-                             {10.5, 55.625, 14 * 0.421875 / 12}});
+  const HandResult h = hand(
+      {{20.0, 0.625, 16 * 1.953125 / 12}, {23.625, 28.25, 0.4375 * 157464.0 / 12}, {10.5, 55.625, 14 * 0.421875 / 12}});
   TP_CHECK_CLOSE(p.area, in2(h.area), kHand, 0.0);
   TP_CHECK_CLOSE(*p.neutral_axis, in(h.centroid), kHand, 0.0);
   TP_CHECK_CLOSE(p.inertia, in4(h.inertia), kHand, 0.0);

@@ -20,8 +20,7 @@ using test::plate;
 // only by the round-off of blending equal dimensions: none, or a few ulps.
 constexpr double kSame = 1e-12;
 
-constexpr model::SectionStage kStages[] = {model::SectionStage::noncomposite,
-                                           model::SectionStage::long_term_composite,
+constexpr model::SectionStage kStages[] = {model::SectionStage::noncomposite, model::SectionStage::long_term_composite,
                                            model::SectionStage::short_term_composite};
 
 Real ft(Real x) { return x * units::kFoot; }
@@ -186,8 +185,9 @@ TEST_CASE("haunches that cannot be interpolated are input errors at the segment"
     model::SectionDefinition b = a;
     b.id = "PS2";
     const Diagnostic d = test::first_error([&] { (void)haunch(model::Taper::linear, a, b); });
-    CHECK(d.message == "haunch from 'PS' to 'PS2': a precast girder's gross properties cannot be recomputed at "
-                       "another depth");
+    CHECK(d.message ==
+          "haunch from 'PS' to 'PS2': a precast girder's gross properties cannot be recomputed at "
+          "another depth");
   }
   SECTION("a deck at one end only") {
     model::SectionDefinition a = plate_girder("ND", 54.0);
