@@ -118,6 +118,21 @@ TEST_CASE("a haunched segment gives a varying EI piece that meets its neighbours
   TP_CHECK_CLOSE(ei.at(ft(100)), ei.at(ft(120)), 1e-12, 0.0);
 }
 
+TEST_CASE("a girder line with one deck without bars has no cracked negative profile", "[section]") {
+  model::Bridge b = willow_run();
+  b.sections[1].deck->longitudinal_bars.clear();
+  const GirderSectionProfile profile(b, b.girders[0]);
+  CHECK_FALSE(profile.cracked_negative_stiffness().has_value());
+  CHECK_FALSE(profile.stages_at(ft(70)).cracked_negative.has_value());
+}
+
+TEST_CASE("a station beyond the girder is an input error", "[section]") {
+  const model::Bridge b = willow_run();
+  const GirderSectionProfile profile(b, b.girders[0]);
+  const Diagnostic d = test::first_error([&] { (void)profile.girder_depth(ft(141)); });
+  CHECK(d.field == "station");
+}
+
 TEST_CASE("segments that leave a gap are an input error at the segment", "[section]") {
   model::Bridge b = willow_run();
   b.girders[0].segments[1].start = ft(55);

@@ -8,6 +8,8 @@ namespace tenthpoint::section {
 namespace {
 
 // Three pieces: EI = 1 on [0, 2], EI(x) = 10 + x on [2, 5], EI = 3 on [5, 6].
+// These tests check the lookup, so the expected values are the pieces' own
+// definitions (no outside source is involved).
 StiffnessProfile three_pieces() {
   StiffnessProfile p;
   p.pieces.push_back(StiffnessPiece{0.0, 2.0, 1.0});
