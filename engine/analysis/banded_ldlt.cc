@@ -48,27 +48,32 @@ FactorizationStatus BandedLdlt::factorize(Real pivot_tolerance) {
     }
     at(i, i) = diagonal;
   }
+  inverse_pivots_.resize(size_);
+  for (std::size_t i = 0; i < size_; ++i) inverse_pivots_[i] = 1.0 / at(i, i);
   factorized_ = true;
   return FactorizationStatus{true, 0, 1.0};
 }
 
 void BandedLdlt::solve_in_place(Real* x, std::size_t first_nonzero) const {
   assert(factorized_);
-  // L y = b
+  const std::size_t width = band_ + 1;
+  const Real* data = data_.data();
+  // L y = b (row i of L sits at data[i * width + (k + band - i)])
   for (std::size_t i = first_nonzero; i < size_; ++i) {
     const std::size_t k0 = std::max(first_nonzero, (i > band_) ? i - band_ : std::size_t{0});
+    const Real* row = data + i * width + band_ - i;
     Real sum = x[i];
-    for (std::size_t k = k0; k < i; ++k) sum -= at(i, k) * x[k];
+    for (std::size_t k = k0; k < i; ++k) sum -= row[k] * x[k];
     x[i] = sum;
   }
-  // D z = y
-  for (std::size_t i = first_nonzero; i < size_; ++i) x[i] /= at(i, i);
-  // L^T x = z
+  // D z = y, then L^T x = z column by column: subtract x[i] times column i
+  // of L^T from the rows above, which keeps the inner loop contiguous.
+  for (std::size_t i = first_nonzero; i < size_; ++i) x[i] *= inverse_pivots_[i];
   for (std::size_t i = size_; i-- > 0;) {
-    const std::size_t k1 = std::min(size_, i + band_ + 1);
-    Real sum = x[i];
-    for (std::size_t k = i + 1; k < k1; ++k) sum -= at(k, i) * x[k];
-    x[i] = sum;
+    const std::size_t k0 = (i > band_) ? i - band_ : std::size_t{0};
+    const Real* row = data + i * width + band_ - i;
+    const Real xi = x[i];
+    for (std::size_t k = k0; k < i; ++k) x[k] -= row[k] * xi;
   }
 }
 

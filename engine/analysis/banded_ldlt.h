@@ -57,6 +57,7 @@ class BandedLdlt {
   // factorisation the strictly lower part is L (unit diagonal implied) and
   // the diagonal is D.
   std::vector<Real> data_;
+  std::vector<Real> inverse_pivots_;  // 1 / D, filled by factorize()
   bool factorized_ = false;
 };
 

@@ -17,15 +17,18 @@ namespace {
 GirderLayout layout() {
   GirderLayout g = continuous_girder("BENCH-3", {30.0, 40.0, 30.0});
   // 31 tenth points + 9 named points = 40 analysis points.
-  g.named_points = {{"splice 1", 22.5}, {"cover plate 1", 26.0}, {"cover plate 2", 34.5}, {"splice 2", 45.0},
-                    {"diaphragm", 51.0},  {"splice 3", 55.0},      {"cover plate 3", 65.5}, {"cover plate 4", 74.0},
-                    {"splice 4", 77.5}};
+  g.named_points = {{"splice 1", 22.5},      {"cover plate 1", 26.0}, {"cover plate 2", 34.5},
+                    {"splice 2", 45.0},      {"diaphragm", 51.0},     {"splice 3", 55.0},
+                    {"cover plate 3", 65.5}, {"cover plate 4", 74.0}, {"splice 4", 77.5}};
   return g;
 }
 
 FlexuralRigidity prismatic_steps() {
   FlexuralRigidity r;
-  r.then_prismatic(26.0, 3.0e9).then_prismatic(8.5, 5.0e9).then_prismatic(31.0, 3.0e9).then_prismatic(8.5, 5.0e9)
+  r.then_prismatic(26.0, 3.0e9)
+      .then_prismatic(8.5, 5.0e9)
+      .then_prismatic(31.0, 3.0e9)
+      .then_prismatic(8.5, 5.0e9)
       .then_prismatic(26.0, 3.0e9);
   return r;
 }
