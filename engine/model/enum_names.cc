@@ -2,6 +2,7 @@
 #include <utility>
 
 #include "engine/model/enums.h"
+#include "engine/model/given_capacity.h"
 
 namespace tenthpoint::model {
 namespace {
@@ -44,6 +45,8 @@ constexpr NameTable<SectionElement, 7> kSectionElement{{{SectionElement::top_fla
                                                         {SectionElement::deck, "deck"}}};
 
 constexpr NameTable<ForceEffect, 2> kForceEffect{{{ForceEffect::moment, "moment"}, {ForceEffect::shear, "shear"}}};
+constexpr NameTable<CapacitySource, 2> kCapacitySource{
+    {{CapacitySource::given, "given"}, {CapacitySource::computed, "computed"}}};
 
 template <typename Enum, std::size_t N>
 std::string_view name_of(const NameTable<Enum, N>& table, Enum value) {
@@ -73,6 +76,7 @@ std::string_view to_string(LoadScope v) { return name_of(kLoadScope, v); }
 std::string_view to_string(DistributionRule v) { return name_of(kDistributionRule, v); }
 std::string_view to_string(SectionElement v) { return name_of(kSectionElement, v); }
 std::string_view to_string(ForceEffect v) { return name_of(kForceEffect, v); }
+std::string_view to_string(CapacitySource v) { return name_of(kCapacitySource, v); }
 
 template <> std::optional<SupportKind> parse(std::string_view t) { return value_of(kSupportKind, t); }
 template <> std::optional<Continuity> parse(std::string_view t) { return value_of(kContinuity, t); }
@@ -86,6 +90,7 @@ template <> std::optional<LoadScope> parse(std::string_view t) { return value_of
 template <> std::optional<DistributionRule> parse(std::string_view t) { return value_of(kDistributionRule, t); }
 template <> std::optional<SectionElement> parse(std::string_view t) { return value_of(kSectionElement, t); }
 template <> std::optional<ForceEffect> parse(std::string_view t) { return value_of(kForceEffect, t); }
+template <> std::optional<CapacitySource> parse(std::string_view t) { return value_of(kCapacitySource, t); }
 
 bool is_steel(MaterialKind kind) {
   return kind == MaterialKind::rolled_steel || kind == MaterialKind::welded_plate_girder ||

@@ -10,10 +10,14 @@
 
 #include "engine/core/numeric.h"
 #include "engine/core/source_location.h"
+#include "engine/model/enums.h"
 
 namespace tenthpoint::model {
 
 enum class CapacitySource { given, computed };
+
+// Spellings "given" / "computed", as in bridge files (parse<CapacitySource> in enum_names.cc).
+std::string_view to_string(CapacitySource v);
 
 struct GivenCapacity {
   std::vector<std::string> girders;  // girder-line ids; empty = all
