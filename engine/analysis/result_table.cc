@@ -8,22 +8,22 @@ std::vector<NamedCurve> named_curves(const InfluenceLines& lines) {
   std::vector<NamedCurve> out;
   for (std::size_t p = 0; p < lines.points.size(); ++p) {
     const std::string where = lines.points[p].label();
+    const Real x = lines.points[p].station;
     const PointInfluenceLines& il = lines.at_points[p];
-    out.push_back({"moment at " + where, "m", &il.moment});
+    out.push_back({"moment at " + where, "m", &il.moment, "moment", where, x});
     if (il.shear_left.shared_knots() == il.shear_right.shared_knots() &&
         il.shear_left.coefficients() == il.shear_right.coefficients()) {
-      out.push_back({"shear at " + where, "N/N", &il.shear_right});
+      out.push_back({"shear at " + where, "N/N", &il.shear_right, "shear", where, x});
     } else {
-      out.push_back({"shear left of " + where, "N/N", &il.shear_left});
-      out.push_back({"shear right of " + where, "N/N", &il.shear_right});
+      out.push_back({"shear left of " + where, "N/N", &il.shear_left, "shear_left", where, x});
+      out.push_back({"shear right of " + where, "N/N", &il.shear_right, "shear_right", where, x});
     }
-    if (!il.deflection.empty()) out.push_back({"deflection at " + where, "m/N", &il.deflection});
+    if (!il.deflection.empty()) out.push_back({"deflection at " + where, "m/N", &il.deflection, "deflection", where, x});
   }
   for (const SupportInfluenceLines& s : lines.supports) {
-    out.push_back({fmt::format("reaction at support {}", s.support_line + 1), "N/N", &s.reaction});
-    if (!s.moment.empty()) {
-      out.push_back({fmt::format("moment at support {}", s.support_line + 1), "N*m/N", &s.moment});
-    }
+    const std::string where = fmt::format("support {}", s.support_line + 1);
+    out.push_back({"reaction at " + where, "N/N", &s.reaction, "reaction", where, s.station});
+    if (!s.moment.empty()) out.push_back({"moment at " + where, "N*m/N", &s.moment, "support_moment", where, s.station});
   }
   return out;
 }

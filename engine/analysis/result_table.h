@@ -29,6 +29,12 @@ struct NamedCurve {
   std::string name;                       // e.g. "moment at span 1 0.4L"
   std::string unit;                       // e.g. "m"
   const PiecewiseCubic* curve = nullptr;  // points into the InfluenceLines it came from
+  // The same, broken down for writers that convert units or group curves:
+  // effect is one of moment, shear, shear_left, shear_right, deflection,
+  // reaction, support_moment; `where` labels the point or support line.
+  std::string effect;
+  std::string where;
+  Real station = 0;  // m, of the point or support line
 };
 
 // Every curve of a set: for each point moment, shear left, shear right (once
