@@ -1,5 +1,7 @@
 #include "engine/report/diagram_export.h"
 
+#include <algorithm>
+#include <cmath>
 #include <optional>
 
 #include <fmt/format.h>
@@ -37,6 +39,19 @@ void for_each_influence(const analysis::GirderLineAnalysis& g, Visit&& visit) {
   }
 }
 
+// Round-off of the solve leaves values like -1e-13 where the exact answer is
+// zero (a moment at a pin); written for people, those read as zero.
+Real tidy(Real value, Real scale) {
+  constexpr Real kRelative = 1e-10;  // far below any printed digit
+  return std::abs(value) <= kRelative * scale ? 0.0 : value;
+}
+
+Real largest(const std::vector<Real>& values) {
+  Real m = 0;
+  for (Real v : values) m = std::max(m, std::abs(v));
+  return m;
+}
+
 std::string csv_field(const std::string& text) {
   if (text.find_first_of(",\"\n") == std::string::npos) return text;
   std::string out = "\"";
@@ -53,28 +68,31 @@ std::string diagrams_csv(const std::vector<analysis::GirderLineAnalysis>& girder
   for (const analysis::GirderLineAnalysis& g : girders) {
     for_each_influence(g, [&](const analysis::NamedCurve& c, Quantity q) {
       const analysis::SampledCurve s = c.curve->sample(options.interior_points);
+      const Real scale = largest(s.values);
       const std::string unit = ordinate_label(q, system);
       for (std::size_t k = 0; k < s.stations.size(); ++k)
         out += fmt::format("{},influence,{},{},{:.6g},{:.6g},{:.9g},{}\n", csv_field(g.girder_id), c.effect,
                            csv_field(c.where), len(c.station), len(s.stations[k]),
-                           units::from_internal(s.values[k], q, system), unit);
+                           units::from_internal(tidy(s.values[k], scale), q, system), unit);
     });
     for (const analysis::ComponentEffects& c : g.dead_loads) {
       const std::string component(model::to_string(c.component));
       const auto& points = g.live_influence.points;
+      const Real m_scale = largest(c.effects.moment);
+      const Real v_scale = std::max(largest(c.effects.shear_left), largest(c.effects.shear_right));
       for (std::size_t i = 0; i < points.size() && i < c.effects.moment.size(); ++i) {
         const std::string label = csv_field(points[i].label());
         const Real x = len(points[i].station);
         out += fmt::format("{},dead_load,{} moment,{},{:.6g},{:.6g},{:.9g},{}\n", csv_field(g.girder_id), component,
-                           label, x, x, units::from_internal(c.effects.moment[i], Quantity::moment, system),
+                           label, x, x, units::from_internal(tidy(c.effects.moment[i], m_scale), Quantity::moment, system),
                            units::label(Quantity::moment, system));
         out += fmt::format("{},dead_load,{} shear_left,{},{:.6g},{:.6g},{:.9g},{}\n", csv_field(g.girder_id),
                            component, label, x, x,
-                           units::from_internal(c.effects.shear_left[i], Quantity::force, system),
+                           units::from_internal(tidy(c.effects.shear_left[i], v_scale), Quantity::force, system),
                            units::label(Quantity::force, system));
         out += fmt::format("{},dead_load,{} shear_right,{},{:.6g},{:.6g},{:.9g},{}\n", csv_field(g.girder_id),
                            component, label, x, x,
-                           units::from_internal(c.effects.shear_right[i], Quantity::force, system),
+                           units::from_internal(tidy(c.effects.shear_right[i], v_scale), Quantity::force, system),
                            units::label(Quantity::force, system));
       }
     }
@@ -107,10 +125,11 @@ std::string diagrams_json(const std::vector<analysis::GirderLineAnalysis>& girde
     json curves = json::array();
     for_each_influence(g, [&](const analysis::NamedCurve& c, Quantity q) {
       const analysis::SampledCurve s = c.curve->sample(options.interior_points);
+      const Real scale = largest(s.values);
       json xs = json::array(), ys = json::array();
       for (std::size_t k = 0; k < s.stations.size(); ++k) {
         xs.push_back(len(s.stations[k]));
-        ys.push_back(units::from_internal(s.values[k], q, system));
+        ys.push_back(units::from_internal(tidy(s.values[k], scale), q, system));
       }
       curves.push_back({{"curve", c.effect}, {"point", c.where}, {"point_station", len(c.station)}, {"x", std::move(xs)},
                         {"value", std::move(ys)}});
@@ -119,9 +138,11 @@ std::string diagrams_json(const std::vector<analysis::GirderLineAnalysis>& girde
     json dead = json::array();
     for (const analysis::ComponentEffects& c : g.dead_loads) {
       json m = json::array(), vl = json::array(), vr = json::array(), r = json::array();
-      for (Real v : c.effects.moment) m.push_back(units::from_internal(v, Quantity::moment, system));
-      for (Real v : c.effects.shear_left) vl.push_back(units::from_internal(v, Quantity::force, system));
-      for (Real v : c.effects.shear_right) vr.push_back(units::from_internal(v, Quantity::force, system));
+      const Real m_scale = largest(c.effects.moment);
+      const Real v_scale = std::max(largest(c.effects.shear_left), largest(c.effects.shear_right));
+      for (Real v : c.effects.moment) m.push_back(units::from_internal(tidy(v, m_scale), Quantity::moment, system));
+      for (Real v : c.effects.shear_left) vl.push_back(units::from_internal(tidy(v, v_scale), Quantity::force, system));
+      for (Real v : c.effects.shear_right) vr.push_back(units::from_internal(tidy(v, v_scale), Quantity::force, system));
       for (Real v : c.effects.reactions) r.push_back(units::from_internal(v, Quantity::force, system));
       dead.push_back({{"component", std::string(model::to_string(c.component))},
                       {"moment", std::move(m)},
