@@ -26,8 +26,9 @@ std::optional<CalendarDate> read_date(const FieldReader& reader, std::string_vie
   const std::optional<std::string> text = reader.optional_text(key);
   if (!text) return std::nullopt;
   if (auto date = parse_calendar_date(*text)) return date;
-  diagnostics.push_back(Diagnostic{Severity::error, reader.where(key), reader.field(key),
-                                   fmt::format("'{}' is not a calendar date; expected a real date as YYYY-MM-DD", *text)});
+  diagnostics.push_back(
+      Diagnostic{Severity::error, reader.where(key), reader.field(key),
+                 fmt::format("'{}' is not a calendar date; expected a real date as YYYY-MM-DD", *text)});
   return std::nullopt;
 }
 
@@ -94,9 +95,9 @@ model::Materials read_materials(const FieldReader& r) {
   if (r.has("deck_concrete")) materials.deck_concrete = read_concrete(r.at("deck_concrete"));
   if (r.has("reinforcement")) {
     const FieldReader bars = r.at("reinforcement");
-    materials.reinforcement = model::Reinforcement{
-        bars.quantity("fy", Quantity::stress),
-        bars.optional_quantity("E", Quantity::stress).value_or(default_steel_modulus(r.units()))};
+    materials.reinforcement =
+        model::Reinforcement{bars.quantity("fy", Quantity::stress),
+                             bars.optional_quantity("E", Quantity::stress).value_or(default_steel_modulus(r.units()))};
   }
   if (r.has("strand")) {
     const FieldReader s = r.at("strand");
@@ -132,13 +133,15 @@ model::SectionProperties read_properties(const FieldReader& r) {
 }
 
 model::Plate read_plate(const FieldReader& r, std::string_view width_key = "width") {
-  return model::Plate{r.quantity(width_key, Quantity::section_length), r.quantity("thickness", Quantity::section_length)};
+  return model::Plate{r.quantity(width_key, Quantity::section_length),
+                      r.quantity("thickness", Quantity::section_length)};
 }
 
 std::vector<model::BarLayer> read_bar_layers(const std::vector<FieldReader>& layers) {
   std::vector<model::BarLayer> out;
   for (const FieldReader& layer : layers)
-    out.push_back(model::BarLayer{layer.quantity("area", Quantity::area), layer.quantity("depth", Quantity::section_length)});
+    out.push_back(
+        model::BarLayer{layer.quantity("area", Quantity::area), layer.quantity("depth", Quantity::section_length)});
   return out;
 }
 
@@ -199,10 +202,9 @@ model::SectionDefinition read_section(const FieldReader& r) {
   if (r.has("ps_girder")) s.description = read_ps_girder(r.at("ps_girder"));
   if (r.has("deck")) {
     const FieldReader d = r.at("deck");
-    s.deck = model::DeckSlab{d.quantity("thickness", Quantity::section_length),
-                             d.quantity("effective_width", Quantity::section_length),
-                             d.optional_quantity("haunch", Quantity::section_length).value_or(0.0),
-                             read_bar_layers(d.items("bars"))};
+    s.deck = model::DeckSlab{
+        d.quantity("thickness", Quantity::section_length), d.quantity("effective_width", Quantity::section_length),
+        d.optional_quantity("haunch", Quantity::section_length).value_or(0.0), read_bar_layers(d.items("bars"))};
   }
   s.where = r.where();
   return s;
@@ -240,9 +242,9 @@ model::DeadLoad read_dead_load(const FieldReader& r) {
   load.girders = r.texts("girders");
   if (r.has("uniform")) {
     const FieldReader u = r.at("uniform");
-    load.shape = model::UniformLoad{u.quantity("intensity", Quantity::line_load),
-                                    u.optional_quantity("start", Quantity::length),
-                                    u.optional_quantity("end", Quantity::length)};
+    load.shape =
+        model::UniformLoad{u.quantity("intensity", Quantity::line_load), u.optional_quantity("start", Quantity::length),
+                           u.optional_quantity("end", Quantity::length)};
   } else if (r.has("point")) {
     const FieldReader p = r.at("point");
     load.shape = model::PointLoad{p.quantity("force", Quantity::force), p.quantity("station", Quantity::length)};

@@ -26,9 +26,12 @@ YamlPathStep index(std::size_t i) { return YamlPathStep{"", i}; }
 const char* description_kind(const model::SectionDefinition& section) {
   if (!section.description) return "properties";
   switch (section.description->index()) {
-    case 0: return "steel_i";
-    case 1: return "rc_beam";
-    default: return "ps_girder";
+    case 0:
+      return "steel_i";
+    case 1:
+      return "rc_beam";
+    default:
+      return "ps_girder";
   }
 }
 
@@ -68,8 +71,8 @@ class Checker {
 
   void check_station(const YamlPath& path, Real station) {
     if (station > length_ + tolerance_)
-      error(path, fmt::format("station {} is beyond the end of the girder ({}, the sum of the spans)",
-                              length(station), length(length_)));
+      error(path, fmt::format("station {} is beyond the end of the girder ({}, the sum of the spans)", length(station),
+                              length(length_)));
   }
 
   void check_reference(const YamlPath& path, const std::string& id, const std::vector<std::string>& known,
@@ -84,8 +87,9 @@ class Checker {
   void check_identity() {
     const model::Identity& id = bridge_.identity;
     if (id.year_reconstructed && *id.year_reconstructed < id.year_built)
-      error(path_of({key("identity"), key("year_reconstructed")}),
-            fmt::format("year reconstructed ({}) is before the year built ({})", *id.year_reconstructed, id.year_built));
+      error(
+          path_of({key("identity"), key("year_reconstructed")}),
+          fmt::format("year reconstructed ({}) is before the year built ({})", *id.year_reconstructed, id.year_built));
   }
 
   void check_supports() {
@@ -122,15 +126,17 @@ class Checker {
   }
 
   void check_unique_ids() {
-    check_unique("sections", bridge_.sections, [](const model::SectionDefinition& s) { return s.id; }, "section");
-    check_unique("girders", bridge_.girders, [](const model::GirderLine& g) { return g.id; }, "girder");
+    check_unique(
+        "sections", bridge_.sections, [](const model::SectionDefinition& s) { return s.id; }, "section");
+    check_unique(
+        "girders", bridge_.girders, [](const model::GirderLine& g) { return g.id; }, "girder");
   }
 
   // A section's description must be of the bridge's material: its capacity
   // is computed with that material's rules.
   void check_section_kinds() {
     const model::MaterialKind kind = bridge_.materials.kind;
-    const char* expected = model::is_steel(kind)                             ? "steel_i"
+    const char* expected = model::is_steel(kind)                              ? "steel_i"
                            : kind == model::MaterialKind::reinforced_concrete ? "rc_beam"
                                                                               : "ps_girder";
     for (std::size_t i = 0; i < bridge_.sections.size(); ++i) {
@@ -153,8 +159,8 @@ class Checker {
     for (std::size_t k = 0; k < girder.segments.size(); ++k) {
       const model::Segment& s = girder.segments[k];
       if (s.end <= s.start + tolerance_)
-        error(segment_path(k, "end"), fmt::format("segment end ({}) must be after its start ({})", length(s.end),
-                                                  length(s.start)));
+        error(segment_path(k, "end"),
+              fmt::format("segment end ({}) must be after its start ({})", length(s.end), length(s.start)));
       if (k == 0 && std::abs(s.start) > tolerance_)
         error(segment_path(k, "start"),
               fmt::format("the first segment starts at {}; expected 0 (the first support), so that segments "
@@ -231,8 +237,9 @@ class Checker {
         if (u->start) check_station(with_key(shape, "start"), *u->start);
         if (u->end) check_station(with_key(shape, "end"), *u->end);
         if (u->start && u->end && *u->end <= *u->start + tolerance_)
-          error(with_key(shape, "end"), fmt::format("a partial uniform load must end after it starts (start {}, end {})",
-                                                    length(*u->start), length(*u->end)));
+          error(with_key(shape, "end"),
+                fmt::format("a partial uniform load must end after it starts (start {}, end {})", length(*u->start),
+                            length(*u->end)));
       } else if (const auto* p = std::get_if<model::PointLoad>(&load.shape)) {
         check_station(with_key(with_key(base, "point"), "station"), p->station);
       }
@@ -248,8 +255,8 @@ class Checker {
       check_station(with_key(base, "start"), given.start);
       check_station(with_key(base, "end"), given.end);
       if (given.end < given.start - tolerance_)
-        error(with_key(base, "end"), fmt::format("end ({}) is before start ({})", length(given.end),
-                                                 length(given.start)));
+        error(with_key(base, "end"),
+              fmt::format("end ({}) is before start ({})", length(given.end), length(given.start)));
     }
     if (capacity.mode == model::CapacitySource::computed && !capacity.given.empty())
       warning(path_of({key("capacity"), key("given")}), "given capacities are ignored when mode is computed");
@@ -267,8 +274,8 @@ class Checker {
           const Real x = geometry.support_station(span) + geometry.span_lengths[span] * tenth / 10.0;
           const bool covered = std::any_of(
               bridge_.capacity.given.begin(), bridge_.capacity.given.end(), [&](const model::GivenCapacity& c) {
-                const bool applies = c.girders.empty() ||
-                                     std::find(c.girders.begin(), c.girders.end(), girder.id) != c.girders.end();
+                const bool applies =
+                    c.girders.empty() || std::find(c.girders.begin(), c.girders.end(), girder.id) != c.girders.end();
                 return applies && x >= c.start - tolerance_ && x <= c.end + tolerance_;
               });
           if (!covered && (uncovered.empty() || std::abs(uncovered.back() - x) > tolerance_)) uncovered.push_back(x);
@@ -277,8 +284,8 @@ class Checker {
       if (uncovered.empty()) continue;
       std::string stations;
       for (std::size_t k = 0; k < uncovered.size() && k < 5; ++k)
-        stations += (k == 0 ? "" : ", ") + format_number(units::from_internal(uncovered[k], Quantity::length,
-                                                                               bridge_.units));
+        stations +=
+            (k == 0 ? "" : ", ") + format_number(units::from_internal(uncovered[k], Quantity::length, bridge_.units));
       if (uncovered.size() > 5) stations += ", ...";
       warning(path_of({key("capacity"), key("given")}),
               fmt::format("girder '{}' has no given capacity at {} of its tenth points (stations {} {}); those "
@@ -297,13 +304,12 @@ class Checker {
         check_station(with_key(base, "start"), loss.start);
         check_station(with_key(base, "end"), loss.end);
         if (loss.end < loss.start - tolerance_)
-          error(with_key(base, "end"), fmt::format("end ({}) is before start ({})", length(loss.end),
-                                                   length(loss.start)));
-        const bool plate = loss.element == model::SectionElement::top_flange ||
-                           loss.element == model::SectionElement::bottom_flange ||
-                           loss.element == model::SectionElement::web ||
-                           loss.element == model::SectionElement::cover_plate ||
-                           loss.element == model::SectionElement::deck;
+          error(with_key(base, "end"),
+                fmt::format("end ({}) is before start ({})", length(loss.end), length(loss.start)));
+        const bool plate =
+            loss.element == model::SectionElement::top_flange || loss.element == model::SectionElement::bottom_flange ||
+            loss.element == model::SectionElement::web || loss.element == model::SectionElement::cover_plate ||
+            loss.element == model::SectionElement::deck;
         if (loss.thickness_loss && !plate)
           error(with_key(base, "thickness_loss"),
                 fmt::format("thickness_loss applies to plates, webs and the deck; give percent_loss for {}",

@@ -25,7 +25,7 @@ std::vector<std::string> shipped_names(std::string_view folder) {
 }
 
 std::optional<DataReference> resolve(std::string_view text, const std::string& from_file, std::string_view folder,
-                                      const char* what, std::string& why) {
+                                     const char* what, std::string& why) {
   if (is_shipped_name(text)) {
     const std::string embedded = fmt::format("engine/data/{}/{}.yaml", folder, text);
     if (auto contents = embedded_file(embedded))

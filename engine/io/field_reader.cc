@@ -45,8 +45,7 @@ std::vector<FieldReader> FieldReader::items() const {
   std::vector<FieldReader> out;
   if (node_->kind != YamlKind::sequence) return out;
   out.reserve(node_->items.size());
-  for (std::size_t i = 0; i < node_->items.size(); ++i)
-    out.emplace_back(node_->items[i], units_, with_index(path_, i));
+  for (std::size_t i = 0; i < node_->items.size(); ++i) out.emplace_back(node_->items[i], units_, with_index(path_, i));
   return out;
 }
 
@@ -87,9 +86,7 @@ std::optional<Real> FieldReader::optional_number(std::string_view key) const {
   return value->number();
 }
 
-int FieldReader::integer(std::string_view key, int fallback) const {
-  return optional_integer(key).value_or(fallback);
-}
+int FieldReader::integer(std::string_view key, int fallback) const { return optional_integer(key).value_or(fallback); }
 
 std::optional<int> FieldReader::optional_integer(std::string_view key) const {
   const YamlNode* value = find(key);

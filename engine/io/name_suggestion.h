@@ -12,7 +12,8 @@ namespace tenthpoint::io {
 // substitutions and swaps of neighbours, ignoring case), when it is close
 // enough to be a plausible typo: at most a third of the typed length, and at
 // least one edit allowed. Ties go to the earlier candidate.
-[[nodiscard]] std::optional<std::string> nearest_name(std::string_view typed, const std::vector<std::string>& candidates);
+[[nodiscard]] std::optional<std::string> nearest_name(std::string_view typed,
+                                                      const std::vector<std::string>& candidates);
 
 // Candidates joined for a message: "a, b, c".
 [[nodiscard]] std::string join_names(const std::vector<std::string>& names);

@@ -74,15 +74,16 @@ std::vector<UnitSlip> slips(Quantity quantity, UnitSystem system) {
   const bool us = system == UnitSystem::us;
   switch (quantity) {
     case Quantity::length:
-      return us ? std::vector<UnitSlip>{{1.0 / 12.0, "inches; expected ft"}, {1.0 / units::kFoot, "metres; expected ft"}}
+      return us ? std::vector<UnitSlip>{{1.0 / 12.0, "inches; expected ft"},
+                                        {1.0 / units::kFoot, "metres; expected ft"}}
                 : std::vector<UnitSlip>{{1.0e-3, "millimetres; expected m"}, {units::kFoot, "feet; expected m"}};
     case Quantity::section_length:
       return us ? std::vector<UnitSlip>{{12.0, "feet; expected in"}, {1.0 / 25.4, "millimetres; expected in"}}
                 : std::vector<UnitSlip>{{25.4, "inches; expected mm"}, {1000.0, "metres; expected mm"}};
     case Quantity::stress:
       return us ? std::vector<UnitSlip>{{1.0e-3, "psi; expected ksi"}, {1.0 / kMpaPerKsi, "MPa; expected ksi"}}
-                : std::vector<UnitSlip>{{kMpaPerKsi, "ksi; expected MPa"}, {1.0e-3, "kPa; expected MPa"},
-                                        {1.0e-6, "Pa; expected MPa"}};
+                : std::vector<UnitSlip>{
+                      {kMpaPerKsi, "ksi; expected MPa"}, {1.0e-3, "kPa; expected MPa"}, {1.0e-6, "Pa; expected MPa"}};
     case Quantity::line_load:
       return us ? std::vector<UnitSlip>{{1.0e-3, "lb/ft; expected kip/ft"}}
                 : std::vector<UnitSlip>{{1.0e-3, "N/m; expected kN/m"}};
@@ -90,7 +91,8 @@ std::vector<UnitSlip> slips(Quantity quantity, UnitSystem system) {
       // 1 kg/m^3 of mass weighs 9.80665e-3 kN/m^3 (standard gravity).
       return us ? std::vector<UnitSlip>{{1.0e-3, "pcf (lb/ft^3); expected kcf"}}
                 : std::vector<UnitSlip>{{9.80665e-3, "a density in kg/m^3; expected a unit weight in kN/m^3"}};
-    default: return {};
+    default:
+      return {};
   }
 }
 
@@ -144,10 +146,10 @@ void check_bound(const PlausibilityBound& bound, const YamlNode& root, UnitSyste
     const Real typed = node.number();
     const Real value = units::to_internal(typed, bound.quantity, system);
     if (value >= low && value <= high) return;
-    std::string message =
-        fmt::format("{} {} is implausible for {}; expected {} to {} ({})", node.text, units::label(bound.quantity, system),
-                    bound.what, format_number(units::from_internal(low, bound.quantity, system)),
-                    format_quantity(high, bound.quantity, system), bound.reason);
+    std::string message = fmt::format("{} {} is implausible for {}; expected {} to {} ({})", node.text,
+                                      units::label(bound.quantity, system), bound.what,
+                                      format_number(units::from_internal(low, bound.quantity, system)),
+                                      format_quantity(high, bound.quantity, system), bound.reason);
     for (const UnitSlip& slip : slips(bound.quantity, system)) {
       const Real corrected = units::to_internal(typed * slip.factor, bound.quantity, system);
       if (corrected >= low && corrected <= high) {

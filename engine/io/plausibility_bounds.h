@@ -18,7 +18,7 @@ struct PlausibilityBound {
   std::string_view field;  // field pattern; "[]" stands for every item: "geometry.spans[]"
   std::string_view what;   // what the value is, for the message: "span length"
   units::Quantity quantity;
-  Real low_us;   // plausible range in US units of `quantity` (ft, in, ksi, ...)
+  Real low_us;  // plausible range in US units of `quantity` (ft, in, ksi, ...)
   Real high_us;
   std::string_view reason;  // why the range, and its source
 };

@@ -52,9 +52,9 @@ class ChainLoader {
       return chain;
     }
     if (depth + 1 >= options_.max_extends_depth) {
-      chain.diagnostics.push_back(error_at(extends->value.where, "extends",
-                                           fmt::format("policies extend one another more than {} deep",
-                                                       options_.max_extends_depth)));
+      chain.diagnostics.push_back(
+          error_at(extends->value.where, "extends",
+                   fmt::format("policies extend one another more than {} deep", options_.max_extends_depth)));
       return chain;
     }
     std::string why;
@@ -64,14 +64,14 @@ class ChainLoader {
       return chain;
     }
     if (std::find(visiting_.begin(), visiting_.end(), reference->label) != visiting_.end()) {
-      chain.diagnostics.push_back(error_at(extends->value.where, "extends",
-                                           fmt::format("policy '{}' extends itself (through {})", label,
-                                                       reference->label)));
+      chain.diagnostics.push_back(
+          error_at(extends->value.where, "extends",
+                   fmt::format("policy '{}' extends itself (through {})", label, reference->label)));
       return chain;
     }
     if (!reference->shipped_contents && !std::filesystem::exists(reference->path)) {
-      chain.diagnostics.push_back(error_at(extends->value.where, "extends",
-                                           fmt::format("policy file not found: {}", reference->path)));
+      chain.diagnostics.push_back(
+          error_at(extends->value.where, "extends", fmt::format("policy file not found: {}", reference->path)));
       return chain;
     }
     visiting_.push_back(label);
@@ -125,8 +125,10 @@ class ChainLoader {
 class PolicyBuilder {
  public:
   PolicyBuilder(const YamlNode& root, Diagnostics& out)
-      : root_(root), out_(out),
-        units_(units::parse_unit_system(root.find("units") ? root.find("units")->text : "").value_or(units::UnitSystem::us)),
+      : root_(root),
+        out_(out),
+        units_(units::parse_unit_system(root.find("units") ? root.find("units")->text : "")
+                   .value_or(units::UnitSystem::us)),
         r_(root, units_) {}
 
   model::Policy build() {
@@ -217,7 +219,8 @@ class PolicyBuilder {
     for (const FieldReader& item : v.items("libraries")) read_library(item, p.vehicles);
     if (v.has("inline")) read_inline(v.at("inline"), p.vehicles);
     for (const auto& [method_name, method_sets] : v.at("sets").members()) {
-      const model::RatingMethod method = model::parse<model::RatingMethod>(method_name).value_or(model::RatingMethod::lrfr);
+      const model::RatingMethod method =
+          model::parse<model::RatingMethod>(method_name).value_or(model::RatingMethod::lrfr);
       std::vector<std::string> set_ids;
       for (const auto& [set_id, list] : method_sets.at("sets").members()) {
         set_ids.push_back(set_id);
@@ -234,7 +237,8 @@ class PolicyBuilder {
       p.default_sets[method] = default_set;
       if (std::find(set_ids.begin(), set_ids.end(), default_set) == set_ids.end()) {
         std::string message = fmt::format("default set '{}' is not one of the {} sets", default_set, method_name);
-        if (auto suggestion = nearest_name(default_set, set_ids)) message += fmt::format(" (did you mean '{}'?)", *suggestion);
+        if (auto suggestion = nearest_name(default_set, set_ids))
+          message += fmt::format(" (did you mean '{}'?)", *suggestion);
         error(method_sets, "default", message + (set_ids.empty() ? "" : "; expected one of: " + join_names(set_ids)));
       }
     }
@@ -275,15 +279,15 @@ class PolicyBuilder {
     for (std::size_t i = 0; i < rows.size(); ++i) {
       f.legal.rows.push_back(model::AdttRow{rows[i].number("adtt"), rows[i].number("gamma_ll")});
       if (i > 0 && f.legal.rows[i].adtt <= f.legal.rows[i - 1].adtt)
-        error(rows[i], "adtt", fmt::format("ADTT rows must increase; {} follows {}", f.legal.rows[i].adtt,
-                                           f.legal.rows[i - 1].adtt));
+        error(rows[i], "adtt",
+              fmt::format("ADTT rows must increase; {} follows {}", f.legal.rows[i].adtt, f.legal.rows[i - 1].adtt));
     }
     f.legal.unknown_adtt = legal.number("unknown_adtt");
     f.legal.between_rows = legal.enumeration("between_rows", model::RowInterpolation::interpolate);
     for (const auto& [id, type] : r.at("permit_types").members()) f.permit_types.push_back(read_permit_type(id, type));
     const FieldReader ev = r.at("emergency");
-    f.emergency = model::EmergencyFactors{ev.number("gamma_ll"),
-                                          ev.enumeration("lanes", model::EmergencyLanes::every_lane)};
+    f.emergency =
+        model::EmergencyFactors{ev.number("gamma_ll"), ev.enumeration("lanes", model::EmergencyLanes::every_lane)};
     for (const FieldReader& m : r.items("multiple_presence")) f.multiple_presence.push_back(m.node().number());
   }
 
@@ -320,7 +324,8 @@ class PolicyBuilder {
     const FieldReader i = r.at("impact");
     f.impact = model::ImpactFormula{i.quantity("numerator", Quantity::length), i.quantity("offset", Quantity::length),
                                     i.number("maximum")};
-    for (const FieldReader& m : r.items("multiple_lane_reduction")) f.multiple_lane_reduction.push_back(m.node().number());
+    for (const FieldReader& m : r.items("multiple_lane_reduction"))
+      f.multiple_lane_reduction.push_back(m.node().number());
   }
 
   void read_condition_factors(model::Policy& p) {
@@ -337,9 +342,10 @@ class PolicyBuilder {
       if (covered[rating] == 0) missing.push_back(std::to_string(rating));
       if (covered[rating] > 1) repeated.push_back(std::to_string(rating));
     }
-    const FieldReader table = r_.at("condition_factor");
-    if (!missing.empty()) error(table, "rows must cover condition ratings 0 to 9; missing " + join_names(missing));
-    if (!repeated.empty()) error(table, "each condition rating must be in one row only; repeated " + join_names(repeated));
+    if (!missing.empty())
+      error(r_, "condition_factor", "rows must cover condition ratings 0 to 9; missing " + join_names(missing));
+    if (!repeated.empty())
+      error(r_, "condition_factor", "each condition rating must be in one row only; repeated " + join_names(repeated));
   }
 
   void read_system_factor(model::SystemFactorPolicy& s, const FieldReader& r) {
@@ -372,8 +378,8 @@ class PolicyBuilder {
     p.lfr_level = r.enumeration("lfr_level", model::RatingLevel::operating);
     p.never_at_or_above_legal_weight = r.boolean("never_at_or_above_legal_weight", true);
     if (p.closure_below >= p.posting_below)
-      error(r, "closure_below", fmt::format("closure_below ({}) must be below posting_below ({})", p.closure_below,
-                                            p.posting_below));
+      error(r, "closure_below",
+            fmt::format("closure_below ({}) must be below posting_below ({})", p.closure_below, p.posting_below));
   }
 
   void read_screening(model::Policy& p) {
@@ -433,11 +439,13 @@ PolicyReadResult read_shipped_policy(std::string_view name, const PolicyReadOpti
 PolicyReadResult read_policy_for_bridge(const model::Bridge& bridge, const PolicyReadOptions& options) {
   if (bridge.rating.policy.empty()) return read_shipped_policy("default", options);
   std::string why;
-  const std::optional<DataReference> reference = resolve_policy_reference(bridge.rating.policy, bridge.source_file, why);
+  const std::optional<DataReference> reference =
+      resolve_policy_reference(bridge.rating.policy, bridge.source_file, why);
   if (!reference) return PolicyReadResult{std::nullopt, {error_at(bridge.rating.where, "rating.policy", why)}};
   if (!reference->shipped_contents && !std::filesystem::exists(reference->path))
-    return PolicyReadResult{std::nullopt, {error_at(bridge.rating.where, "rating.policy",
-                                                    fmt::format("policy file not found: {}", reference->path))}};
+    return PolicyReadResult{
+        std::nullopt,
+        {error_at(bridge.rating.where, "rating.policy", fmt::format("policy file not found: {}", reference->path))}};
   ChainLoader loader(options);
   return finish(loader.load(*reference, 0));
 }

@@ -42,11 +42,16 @@ const std::map<std::string, std::string>& pattern_phrases() {
 
 json to_json(const YamlNode& node) {
   switch (node.kind) {
-    case YamlKind::null: return nullptr;
-    case YamlKind::boolean: return node.boolean;
-    case YamlKind::integer: return node.integer;
-    case YamlKind::real: return node.real;
-    case YamlKind::string: return node.text;
+    case YamlKind::null:
+      return nullptr;
+    case YamlKind::boolean:
+      return node.boolean;
+    case YamlKind::integer:
+      return node.integer;
+    case YamlKind::real:
+      return node.real;
+    case YamlKind::string:
+      return node.text;
     case YamlKind::sequence: {
       json out = json::array();
       for (const YamlNode& item : node.items) out.push_back(to_json(item));
@@ -106,13 +111,18 @@ std::string truncate(const std::string& text, std::size_t longest = 40) {
 // What the user wrote, for "(got ...)".
 std::string describe(const YamlNode& node) {
   switch (node.kind) {
-    case YamlKind::null: return "nothing";
+    case YamlKind::null:
+      return "nothing";
     case YamlKind::boolean:
     case YamlKind::integer:
-    case YamlKind::real: return node.text;
-    case YamlKind::string: return "'" + truncate(node.text) + "'";
-    case YamlKind::sequence: return "a list";
-    case YamlKind::mapping: return "a mapping";
+    case YamlKind::real:
+      return node.text;
+    case YamlKind::string:
+      return "'" + truncate(node.text) + "'";
+    case YamlKind::sequence:
+      return "a list";
+    case YamlKind::mapping:
+      return "a mapping";
   }
   return "?";
 }
@@ -139,9 +149,7 @@ bool kind_matches_type(YamlKind kind, const std::string& type) {
   return false;
 }
 
-std::string value_text(const ojson& value) {
-  return value.is_string() ? value.get<std::string>() : value.dump();
-}
+std::string value_text(const ojson& value) { return value.is_string() ? value.get<std::string>() : value.dump(); }
 
 std::string format_number(double value) { return fmt::format("{}", value); }
 
@@ -312,8 +320,8 @@ class MessageBuilder {
   };
 
   void emit(const YamlPath& path, std::string message, std::optional<SourceLocation> where = std::nullopt) {
-    out_.push_back(Diagnostic{Severity::error, where ? *where : locate(root_, path), to_string(path),
-                              std::move(message)});
+    out_.push_back(
+        Diagnostic{Severity::error, where ? *where : locate(root_, path), to_string(path), std::move(message)});
   }
 
   const YamlNode* node_at(const YamlPath& path) const { return find_node(root_, path); }
@@ -363,8 +371,8 @@ class MessageBuilder {
       std::vector<std::string> present;
       for (const std::string& name : group.names)
         if (node != nullptr && node->find(name) != nullptr) present.push_back(name);
-      planned_.push_back({path, fmt::format("give only one of: {} (found {})", join_names(group.names),
-                                            join_names(present))});
+      planned_.push_back(
+          {path, fmt::format("give only one of: {} (found {})", join_names(group.names), join_names(present))});
     } else if (kind == Kind::one_of_none) {
       planned_.push_back({path, fmt::format("expected one of the fields: {}", join_names(group.names))});
     } else {
@@ -413,21 +421,33 @@ class MessageBuilder {
     const YamlNode* node = node_at(error.path);
     const Schemas schemas = navigator_.at(error.path);
     switch (kind) {
-      case Kind::required: return missing_field(error.path, quoted_name(error.message), schemas, node);
-      case Kind::unknown_field: return unknown_fields(error.path, schemas, node);
-      case Kind::negation: return exclusive_fields(error.path, schemas, node);
-      case Kind::dependency: return missing_dependency(error.path, quoted_name(error.message), schemas, node);
-      default: break;
+      case Kind::required:
+        return missing_field(error.path, quoted_name(error.message), schemas, node);
+      case Kind::unknown_field:
+        return unknown_fields(error.path, schemas, node);
+      case Kind::negation:
+        return exclusive_fields(error.path, schemas, node);
+      case Kind::dependency:
+        return missing_dependency(error.path, quoted_name(error.message), schemas, node);
+      default:
+        break;
     }
     if (node == nullptr) return emit(error.path, lower_first(error.message));
     switch (kind) {
-      case Kind::type: return wrong_type(error.path, schemas, *node);
-      case Kind::enumeration: return not_in_enum(error.path, schemas, *node);
-      case Kind::constant: return not_const(error.path, schemas, *node);
-      case Kind::bound: return out_of_bounds(error, schemas, *node);
-      case Kind::item_count: return wrong_item_count(error, schemas, *node);
-      case Kind::string_length: return wrong_length(error, schemas, *node);
-      default: return emit(error.path, lower_first(error.message));
+      case Kind::type:
+        return wrong_type(error.path, schemas, *node);
+      case Kind::enumeration:
+        return not_in_enum(error.path, schemas, *node);
+      case Kind::constant:
+        return not_const(error.path, schemas, *node);
+      case Kind::bound:
+        return out_of_bounds(error, schemas, *node);
+      case Kind::item_count:
+        return wrong_item_count(error, schemas, *node);
+      case Kind::string_length:
+        return wrong_length(error, schemas, *node);
+      default:
+        return emit(error.path, lower_first(error.message));
     }
   }
 
@@ -469,10 +489,19 @@ class MessageBuilder {
     if (std::find(it->names.begin(), it->names.end(), name) == it->names.end()) it->names.push_back(name);
   }
 
+  // A missing field that an unknown field's suggestion already names is the
+  // same slip seen twice ("spann" for "spans"); report it once.
   void emit_missing() {
-    for (const Missing& m : missing_) {
+    for (Missing& m : missing_) {
+      const std::string field = to_string(m.path);
+      std::erase_if(m.names, [&](const std::string& name) {
+        return std::find(suggested_.begin(), suggested_.end(), std::pair<std::string, std::string>{field, name}) !=
+               suggested_.end();
+      });
+      if (m.names.empty()) continue;
       if (m.names.size() == 1) {
-        emit(with_key(m.path, m.names.front()), fmt::format("missing field '{}'", m.names.front()), locate(root_, m.path));
+        emit(with_key(m.path, m.names.front()), fmt::format("missing field '{}'", m.names.front()),
+             locate(root_, m.path));
       } else {
         emit(m.path, fmt::format("missing fields: {}", join_names(m.names)));
       }
@@ -480,14 +509,16 @@ class MessageBuilder {
   }
 
   void unknown_fields(const YamlPath& path, const Schemas& schemas, const YamlNode* node) {
-    if (node == nullptr || node->kind != YamlKind::mapping || SchemaNavigator::allows_extra_properties(schemas))
-      return;
+    if (node == nullptr || node->kind != YamlKind::mapping || SchemaNavigator::allows_extra_properties(schemas)) return;
     const std::vector<std::string> allowed = SchemaNavigator::property_names(schemas);
     // valijson names only the first stranger in an object; report them all.
     for (const YamlMember& member : node->members) {
       if (std::find(allowed.begin(), allowed.end(), member.key) != allowed.end()) continue;
       std::string message = fmt::format("unknown field '{}'", truncate(member.key));
-      if (auto suggestion = nearest_name(member.key, allowed)) message += fmt::format(" (did you mean '{}'?)", *suggestion);
+      if (auto suggestion = nearest_name(member.key, allowed)) {
+        message += fmt::format(" (did you mean '{}'?)", *suggestion);
+        suggested_.push_back({to_string(path), *suggestion});
+      }
       message += allowed.empty() ? "; no fields are allowed here" : "; expected one of: " + join_names(allowed);
       emit(with_key(path, member.key), std::move(message), member.key_where);
     }
@@ -509,8 +540,7 @@ class MessageBuilder {
     emit(path, fmt::format("give only one of: {} (found {})", join_names(names), join_names(present)));
   }
 
-  void missing_dependency(const YamlPath& path, const std::string& name, const Schemas& schemas,
-                          const YamlNode* node) {
+  void missing_dependency(const YamlPath& path, const std::string& name, const Schemas& schemas, const YamlNode* node) {
     for (const ojson* schema : schemas) {
       auto dependencies = schema->find("dependencies");
       if (dependencies == schema->end() || !dependencies->is_object() || node == nullptr) continue;
@@ -518,8 +548,8 @@ class MessageBuilder {
         const auto needed = string_list(it.value());
         const YamlMember* trigger = node->find_member(it.key());
         if (trigger == nullptr || std::find(needed.begin(), needed.end(), name) == needed.end()) continue;
-        return emit(with_key(path, name), fmt::format("missing field '{}', required when '{}' is given", name, it.key()),
-                    trigger->key_where);
+        return emit(with_key(path, name),
+                    fmt::format("missing field '{}', required when '{}' is given", name, it.key()), trigger->key_where);
       }
     }
     emit(with_key(path, name), fmt::format("missing field '{}'", name), locate(root_, path));
@@ -599,11 +629,11 @@ class MessageBuilder {
     const std::size_t n = node.items.size();
     for (const ojson* schema : schemas) {
       if (auto it = schema->find("minItems"); it != schema->end() && it->is_number() && n < it->get<std::size_t>())
-        return emit(error.path, fmt::format("expected at least {} (got {})",
-                                            plural(it->get<std::size_t>(), "item", "items"), n));
+        return emit(error.path,
+                    fmt::format("expected at least {} (got {})", plural(it->get<std::size_t>(), "item", "items"), n));
       if (auto it = schema->find("maxItems"); it != schema->end() && it->is_number() && n > it->get<std::size_t>())
-        return emit(error.path, fmt::format("expected at most {} (got {})",
-                                            plural(it->get<std::size_t>(), "item", "items"), n));
+        return emit(error.path,
+                    fmt::format("expected at most {} (got {})", plural(it->get<std::size_t>(), "item", "items"), n));
     }
     emit(error.path, lower_first(error.message));
   }
@@ -617,8 +647,8 @@ class MessageBuilder {
       if (auto it = schema->find("minLength"); it != schema->end() && it->is_number() && n < it->get<std::size_t>())
         return emit(error.path, it->get<std::size_t>() == 1
                                     ? std::string("must not be empty")
-                                    : fmt::format("must be at least {} long", plural(it->get<std::size_t>(),
-                                                                                       "character", "characters")));
+                                    : fmt::format("must be at least {} long",
+                                                  plural(it->get<std::size_t>(), "character", "characters")));
       if (auto it = schema->find("maxLength"); it != schema->end() && it->is_number() && n > it->get<std::size_t>())
         return emit(error.path, fmt::format("is too long ({} characters; at most {})", n, it->get<std::size_t>()));
     }
@@ -675,6 +705,7 @@ class MessageBuilder {
   std::vector<Suppression> suppressions_;
   std::vector<Planned> planned_;
   std::vector<Missing> missing_;
+  std::vector<std::pair<std::string, std::string>> suggested_;  // (object path, suggested field name)
   Diagnostics out_;
 };
 

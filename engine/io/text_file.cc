@@ -47,12 +47,15 @@ std::size_t utf8_sequence_length(std::string_view text, std::size_t i) {
 }  // namespace
 
 std::optional<Diagnostic> check_text(std::string_view text, const std::string& file) {
+  // A NUL byte anywhere marks a binary file; say so rather than complain
+  // about the first byte that happens not to be UTF-8.
+  if (text.find('\0') != std::string_view::npos)
+    return file_error(file, "not a text file (contains NUL bytes); expected a YAML text file");
   int line = 1, column = 1;
   for (std::size_t i = 0; i < text.size();) {
-    if (text[i] == '\0')
-      return file_error(file, "not a text file (contains a NUL byte); expected a YAML text file", line, column);
     const std::size_t length = utf8_sequence_length(text, i);
-    if (length == 0) return file_error(file, "not UTF-8 text (invalid byte sequence); save the file as UTF-8", line, column);
+    if (length == 0)
+      return file_error(file, "not UTF-8 text (invalid byte sequence); save the file as UTF-8", line, column);
     if (text[i] == '\n') {
       ++line;
       column = 1;

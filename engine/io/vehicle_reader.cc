@@ -24,8 +24,11 @@ constexpr Real kWeightTolerance = 0.005;
 class VehicleBuilder {
  public:
   VehicleBuilder(const YamlNode& root, const model::VehicleLibrary* known, Diagnostics& out)
-      : root_(root), known_(known), out_(out),
-        units_(units::parse_unit_system(root.find("units") ? root.find("units")->text : "").value_or(units::UnitSystem::us)) {}
+      : root_(root),
+        known_(known),
+        out_(out),
+        units_(units::parse_unit_system(root.find("units") ? root.find("units")->text : "")
+                   .value_or(units::UnitSystem::us)) {}
 
   model::VehicleLibrary build() {
     const FieldReader r(root_, units_);
@@ -55,7 +58,8 @@ class VehicleBuilder {
       const std::string id = item.text("id");
       const auto [it, inserted] = first_line.emplace(id, item.where("id").line);
       if (!inserted)
-        error(item, "id", fmt::format("{} id '{}' is already used (line {}); ids must be unique", what, id, it->second));
+        error(item, "id",
+              fmt::format("{} id '{}' is already used (line {}); ids must be unique", what, id, it->second));
     }
   }
 
@@ -127,9 +131,9 @@ class VehicleBuilder {
     }
     if (r.has("lane_concentrated")) {
       const FieldReader l = r.at("lane_concentrated");
-      c.lane_concentrated = model::LaneConcentratedLoads{l.quantity("moment", Quantity::force),
-                                                         l.quantity("shear", Quantity::force),
-                                                         l.boolean("second_load_for_negative_moment")};
+      c.lane_concentrated =
+          model::LaneConcentratedLoads{l.quantity("moment", Quantity::force), l.quantity("shear", Quantity::force),
+                                       l.boolean("second_load_for_negative_moment")};
     }
     for (const std::string& e : r.texts("effects"))
       if (auto effect = model::parse<model::LoadEffect>(e)) c.effects.push_back(*effect);
@@ -155,15 +159,15 @@ class VehicleBuilder {
       return c;
     }
     if (c.fixed_variable_spacing) {
-      const bool any_variable =
-          std::any_of(train->spacings.begin(), train->spacings.end(), [](const model::AxleSpacing& s) { return s.variable(); });
+      const bool any_variable = std::any_of(train->spacings.begin(), train->spacings.end(),
+                                            [](const model::AxleSpacing& s) { return s.variable(); });
       if (!any_variable)
         warning(r, "fixed_variable_spacing", fmt::format("train '{}' has no variable spacing to fix", train->id));
       for (const model::AxleSpacing& s : train->spacings)
         if (s.variable() && (*c.fixed_variable_spacing < s.min || *c.fixed_variable_spacing > s.max))
           warning(r, "fixed_variable_spacing",
-                  fmt::format("{} is outside the train's variable spacing of {} to {}", length(*c.fixed_variable_spacing),
-                              length(s.min), length(s.max)));
+                  fmt::format("{} is outside the train's variable spacing of {} to {}",
+                              length(*c.fixed_variable_spacing), length(s.min), length(s.max)));
     }
     return c;
   }
@@ -207,7 +211,8 @@ class VehicleBuilder {
 
 void prefix_fields(Diagnostics& diagnostics, std::string_view prefix) {
   if (prefix.empty()) return;
-  for (Diagnostic& d : diagnostics) d.field = d.field.empty() ? std::string(prefix) : fmt::format("{}.{}", prefix, d.field);
+  for (Diagnostic& d : diagnostics)
+    d.field = d.field.empty() ? std::string(prefix) : fmt::format("{}.{}", prefix, d.field);
 }
 
 }  // namespace
@@ -247,8 +252,9 @@ VehicleReadResult read_shipped_vehicles(std::string_view name, const VehicleRead
   std::string why;
   const std::optional<DataReference> reference = resolve_vehicle_reference(name, "<shipped>/vehicles", why);
   if (!reference || !reference->shipped_contents)
-    return VehicleReadResult{std::nullopt, {Diagnostic{Severity::error, SourceLocation{std::string(name), 0, 0}, "",
-                                                       why.empty() ? "not a shipped vehicle library" : why}}};
+    return VehicleReadResult{std::nullopt,
+                             {Diagnostic{Severity::error, SourceLocation{std::string(name), 0, 0}, "",
+                                         why.empty() ? "not a shipped vehicle library" : why}}};
   return read_vehicle_text(*reference->shipped_contents, reference->label, options);
 }
 

@@ -28,7 +28,7 @@ struct YamlNode {
   bool boolean = false;
   std::int64_t integer = 0;
   double real = 0;
-  SourceLocation where;  // start of the node
+  SourceLocation where;             // start of the node
   std::vector<YamlNode> items;      // sequence items
   std::vector<YamlMember> members;  // mapping members in file order
 
@@ -53,7 +53,7 @@ struct YamlMember {
 // A mapping key, a sequence index or nothing (the document root), for
 // addressing a node from the root: {"geometry", "spans", 1}.
 struct YamlPathStep {
-  std::string key;            // used when index is empty
+  std::string key;  // used when index is empty
   std::optional<std::size_t> index;
 };
 using YamlPath = std::vector<YamlPathStep>;

@@ -122,8 +122,7 @@ class TreeBuilder final : public YAML::EventHandler {
       throw Refusal{location(file_, mark),
                     fmt::format("too many yaml aliases (more than {}); write the values out", limits_.max_aliases)};
     auto it = anchored_.find(anchor);
-    if (it == anchored_.end())
-      throw Refusal{location(file_, mark), "yaml alias refers to a node that contains it"};
+    if (it == anchored_.end()) throw Refusal{location(file_, mark), "yaml alias refers to a node that contains it"};
     node_count_ += it->second.node_count();
     check_node_count(mark);
     finish(it->second, 0);
@@ -176,15 +175,14 @@ class TreeBuilder final : public YAML::EventHandler {
 
   void check_node_count(const YAML::Mark& mark) const {
     if (node_count_ > limits_.max_nodes)
-      throw Refusal{location(file_, mark),
-                    fmt::format("document is too large (more than {} values after expanding aliases)",
-                                limits_.max_nodes)};
+      throw Refusal{
+          location(file_, mark),
+          fmt::format("document is too large (more than {} values after expanding aliases)", limits_.max_nodes)};
   }
 
   void open(const YAML::Mark& mark, const std::string& tag, YAML::anchor_t anchor, YamlKind kind) {
     if (static_cast<int>(stack_.size()) >= limits_.max_depth)
-      throw Refusal{location(file_, mark),
-                    fmt::format("nesting is too deep (more than {} levels)", limits_.max_depth)};
+      throw Refusal{location(file_, mark), fmt::format("nesting is too deep (more than {} levels)", limits_.max_depth)};
     const bool standard = tag == "?" || tag == "!" || tag.empty() ||
                           tag == (kind == YamlKind::mapping ? "tag:yaml.org,2002:map" : "tag:yaml.org,2002:seq");
     if (!standard) throw Refusal{location(file_, mark), fmt::format("unsupported yaml tag '{}'", tag)};
@@ -261,8 +259,7 @@ class TreeBuilder final : public YAML::EventHandler {
       // hold a mapping with a hundred thousand keys.
       const auto [first, inserted] = parent.key_lines.emplace(node.text, node.where.line);
       if (!inserted)
-        throw Refusal{node.where,
-                      fmt::format("duplicate key '{}' (first given at line {})", node.text, first->second)};
+        throw Refusal{node.where, fmt::format("duplicate key '{}' (first given at line {})", node.text, first->second)};
       parent.has_key = true;
       parent.key = node.text;
       parent.key_where = node.where;
@@ -292,9 +289,9 @@ Diagnostic error_at(SourceLocation where, std::string message) {
 YamlParseResult parse_yaml(std::string_view text, const std::string& file, const YamlLimits& limits) {
   YamlParseResult result;
   if (text.size() > limits.max_file_bytes) {
-    result.diagnostics.push_back(error_at(SourceLocation{file, 0, 0},
-                                          fmt::format("file is too large ({} bytes; the limit is {} bytes)",
-                                                      text.size(), limits.max_file_bytes)));
+    result.diagnostics.push_back(error_at(
+        SourceLocation{file, 0, 0},
+        fmt::format("file is too large ({} bytes; the limit is {} bytes)", text.size(), limits.max_file_bytes)));
     return result;
   }
   if (auto problem = check_text(text, file)) {

@@ -38,8 +38,7 @@ struct YamlParseResult {
 
 // Parses `text`, labelling locations with `file`. An empty document (no
 // content besides comments and blank lines) is an error.
-[[nodiscard]] YamlParseResult parse_yaml(std::string_view text, const std::string& file,
-                                         const YamlLimits& limits = {});
+[[nodiscard]] YamlParseResult parse_yaml(std::string_view text, const std::string& file, const YamlLimits& limits = {});
 
 // Reads `path` (see read_text_file for the refusals) and parses it.
 [[nodiscard]] YamlParseResult parse_yaml_file(const std::string& path, const YamlLimits& limits = {});

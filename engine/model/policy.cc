@@ -50,11 +50,26 @@ std::string_view to_string(RoundingRule v) { return name_of(kRoundingRule, v); }
 std::string_view to_string(RowInterpolation v) { return name_of(kRowInterpolation, v); }
 std::string_view to_string(PermitDistribution v) { return name_of(kPermitDistribution, v); }
 std::string_view to_string(EmergencyLanes v) { return name_of(kEmergencyLanes, v); }
-template <> std::optional<RatingLevel> parse(std::string_view t) { return value_of(kRatingLevel, t); }
-template <> std::optional<RoundingRule> parse(std::string_view t) { return value_of(kRoundingRule, t); }
-template <> std::optional<RowInterpolation> parse(std::string_view t) { return value_of(kRowInterpolation, t); }
-template <> std::optional<PermitDistribution> parse(std::string_view t) { return value_of(kPermitDistribution, t); }
-template <> std::optional<EmergencyLanes> parse(std::string_view t) { return value_of(kEmergencyLanes, t); }
+template <>
+std::optional<RatingLevel> parse(std::string_view t) {
+  return value_of(kRatingLevel, t);
+}
+template <>
+std::optional<RoundingRule> parse(std::string_view t) {
+  return value_of(kRoundingRule, t);
+}
+template <>
+std::optional<RowInterpolation> parse(std::string_view t) {
+  return value_of(kRowInterpolation, t);
+}
+template <>
+std::optional<PermitDistribution> parse(std::string_view t) {
+  return value_of(kPermitDistribution, t);
+}
+template <>
+std::optional<EmergencyLanes> parse(std::string_view t) {
+  return value_of(kEmergencyLanes, t);
+}
 
 Real LegalLoadFactors::gamma_ll(std::optional<Real> adtt) const {
   assert(!rows.empty());
@@ -79,9 +94,7 @@ const PermitType* LrfrFactors::find_permit_type(std::string_view id) const {
 
 Real LrfrFactors::multiple_presence_for(int lanes) const { return last_or_indexed(multiple_presence, lanes); }
 
-Real ImpactFormula::at(Real span_length) const {
-  return std::min(maximum, numerator / (span_length + offset));
-}
+Real ImpactFormula::at(Real span_length) const { return std::min(maximum, numerator / (span_length + offset)); }
 
 Real LfrFactors::lane_reduction_for(int lanes) const { return last_or_indexed(multiple_lane_reduction, lanes); }
 

@@ -33,11 +33,16 @@ std::string_view to_string(RoundingRule v);
 std::string_view to_string(RowInterpolation v);
 std::string_view to_string(PermitDistribution v);
 std::string_view to_string(EmergencyLanes v);
-template <> std::optional<RatingLevel> parse(std::string_view text);
-template <> std::optional<RoundingRule> parse(std::string_view text);
-template <> std::optional<RowInterpolation> parse(std::string_view text);
-template <> std::optional<PermitDistribution> parse(std::string_view text);
-template <> std::optional<EmergencyLanes> parse(std::string_view text);
+template <>
+std::optional<RatingLevel> parse(std::string_view text);
+template <>
+std::optional<RoundingRule> parse(std::string_view text);
+template <>
+std::optional<RowInterpolation> parse(std::string_view text);
+template <>
+std::optional<PermitDistribution> parse(std::string_view text);
+template <>
+std::optional<EmergencyLanes> parse(std::string_view text);
 
 struct LevelFactors {
   Real inventory = 0;
@@ -124,7 +129,7 @@ struct LfrFactors {
 };
 
 struct DynamicAllowance {
-  Real standard = 0;                          // IM as a fraction
+  Real standard = 0;                            // IM as a fraction
   std::map<std::string, Real> riding_surfaces;  // named options
 
   // IM for a riding-surface option; the standard one for "" and nullopt for
@@ -160,8 +165,8 @@ struct PostingPolicy {
   Real equation_divisor = 0;  // d in (W / d)(RF - o)
   Real equation_offset = 0;   // o
   RoundingRule rounding = RoundingRule::down;
-  Real increment = 0;                      // N (a weight)
-  std::optional<Real> minimum_posting;     // N; a posting below it closes the bridge
+  Real increment = 0;                   // N (a weight)
+  std::optional<Real> minimum_posting;  // N; a posting below it closes the bridge
   RatingLevel lfr_level = RatingLevel::operating;
   bool never_at_or_above_legal_weight = true;
 };

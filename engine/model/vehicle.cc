@@ -43,8 +43,14 @@ auto value_in(const Table& table, std::string_view text) -> std::optional<typena
 
 std::string_view to_string(VehicleCategory v) { return name_in(kVehicleCategory, v); }
 std::string_view to_string(LoadEffect v) { return name_in(kLoadEffect, v); }
-template <> std::optional<VehicleCategory> parse(std::string_view t) { return value_in(kVehicleCategory, t); }
-template <> std::optional<LoadEffect> parse(std::string_view t) { return value_in(kLoadEffect, t); }
+template <>
+std::optional<VehicleCategory> parse(std::string_view t) {
+  return value_in(kVehicleCategory, t);
+}
+template <>
+std::optional<LoadEffect> parse(std::string_view t) {
+  return value_in(kLoadEffect, t);
+}
 
 Real AxleTrain::gross_weight() const { return std::accumulate(axle_weights.begin(), axle_weights.end(), Real{0}); }
 
@@ -74,13 +80,18 @@ const LoadModel* VehicleLibrary::find_load_model(std::string_view model_id) cons
 void VehicleLibrary::merge(const VehicleLibrary& other) {
   for (const AxleTrain& train : other.trains) {
     auto it = std::find_if(trains.begin(), trains.end(), [&](const AxleTrain& t) { return t.id == train.id; });
-    if (it != trains.end()) *it = train;
-    else trains.push_back(train);
+    if (it != trains.end())
+      *it = train;
+    else
+      trains.push_back(train);
   }
   for (const LoadModel& model : other.load_models) {
-    auto it = std::find_if(load_models.begin(), load_models.end(), [&](const LoadModel& m) { return m.id == model.id; });
-    if (it != load_models.end()) *it = model;
-    else load_models.push_back(model);
+    auto it =
+        std::find_if(load_models.begin(), load_models.end(), [&](const LoadModel& m) { return m.id == model.id; });
+    if (it != load_models.end())
+      *it = model;
+    else
+      load_models.push_back(model);
   }
 }
 

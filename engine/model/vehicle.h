@@ -33,8 +33,10 @@ enum class LoadEffect { positive_moment, negative_moment, shear, end_reaction, i
 
 std::string_view to_string(VehicleCategory v);
 std::string_view to_string(LoadEffect v);
-template <> std::optional<VehicleCategory> parse(std::string_view text);
-template <> std::optional<LoadEffect> parse(std::string_view text);
+template <>
+std::optional<VehicleCategory> parse(std::string_view text);
+template <>
+std::optional<LoadEffect> parse(std::string_view text);
 
 struct AxleSpacing {
   Real min = 0;  // m
@@ -46,7 +48,7 @@ struct AxleSpacing {
 struct AxleTrain {
   std::string id;
   std::string name;
-  std::vector<Real> axle_weights;   // N, front axle first
+  std::vector<Real> axle_weights;     // N, front axle first
   std::vector<AxleSpacing> spacings;  // axle_weights.size() - 1 of them
   std::string source;                 // where the configuration comes from, e.g. "AASHTO LRFD 3.6.1.2.2"
   SourceLocation where;
@@ -75,8 +77,8 @@ struct LaneConcentratedLoads {
 // Span lengths a case applies to, tested against the span in which the
 // effect is evaluated (for a support effect, the longer adjacent span).
 struct SpanCondition {
-  std::optional<Real> longer_than;     // m, exclusive
-  std::optional<Real> not_longer_than; // m, inclusive
+  std::optional<Real> longer_than;      // m, exclusive
+  std::optional<Real> not_longer_than;  // m, inclusive
 };
 
 // One way of placing a load model on the bridge.

@@ -63,8 +63,8 @@ std::vector<const nlohmann::ordered_json*> SchemaNavigator::expand(const nlohman
   return out;
 }
 
-std::vector<const nlohmann::ordered_json*> SchemaNavigator::step(const std::vector<const nlohmann::ordered_json*>& parents,
-                                                         const YamlPathStep& step) const {
+std::vector<const nlohmann::ordered_json*> SchemaNavigator::step(
+    const std::vector<const nlohmann::ordered_json*>& parents, const YamlPathStep& step) const {
   std::vector<const nlohmann::ordered_json*> out;
   for (const nlohmann::ordered_json* parent : parents) {
     const nlohmann::ordered_json* child = nullptr;

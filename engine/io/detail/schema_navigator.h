@@ -35,18 +35,20 @@ class SchemaNavigator {
   [[nodiscard]] std::vector<const nlohmann::ordered_json*> at(const YamlPath& path) const;
 
   // The subschemas (expanded) for one step below values constrained by `parents`.
-  [[nodiscard]] std::vector<const nlohmann::ordered_json*> step(const std::vector<const nlohmann::ordered_json*>& parents,
-                                                        const YamlPathStep& step) const;
+  [[nodiscard]] std::vector<const nlohmann::ordered_json*> step(
+      const std::vector<const nlohmann::ordered_json*>& parents, const YamlPathStep& step) const;
 
   // Property names the subschemas declare, in declaration order, without repeats.
-  [[nodiscard]] static std::vector<std::string> property_names(const std::vector<const nlohmann::ordered_json*>& schemas);
+  [[nodiscard]] static std::vector<std::string> property_names(
+      const std::vector<const nlohmann::ordered_json*>& schemas);
 
   // True when some subschema leaves extra properties open (no
   // "additionalProperties": false).
   [[nodiscard]] static bool allows_extra_properties(const std::vector<const nlohmann::ordered_json*>& schemas);
 
  private:
-  void expand_into(const nlohmann::ordered_json& schema, std::vector<const nlohmann::ordered_json*>& out, int depth) const;
+  void expand_into(const nlohmann::ordered_json& schema, std::vector<const nlohmann::ordered_json*>& out,
+                   int depth) const;
 
   const nlohmann::ordered_json& root_;
 };
