@@ -46,6 +46,27 @@ int main(int argc, char** argv) {
     commands.push_back({std::move(command), sub});
   }
 
+  // CLI11 reports a mistyped command only as "a subcommand is required";
+  // name the word and the commands there are instead.
+  for (int i = 1; i < argc; ++i) {
+    const std::string word = argv[i];
+    if (word.empty() || word[0] == '-') {
+      if (word == "--log-level") ++i;  // skip its value
+      continue;
+    }
+    bool known = false;
+    std::string names;
+    for (const auto& declared : commands) {
+      known = known || declared.subcommand->get_name() == word;
+      names += (names.empty() ? "" : ", ") + declared.subcommand->get_name();
+    }
+    if (!known) {
+      std::fprintf(stderr, "tenthpoint: unknown command '%s'; expected one of: %s\n", word.c_str(), names.c_str());
+      return kExitUsage;
+    }
+    break;
+  }
+
   try {
     app.parse(argc, argv);
   } catch (const CLI::CallForHelp& e) {
