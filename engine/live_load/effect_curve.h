@@ -1,0 +1,127 @@
+// EffectCurve: one influence line made ready for moving and distributed
+// loads. It keeps the exact piecewise cubic from engine/analysis and adds
+// what the searches ask of it many times: per-piece value ranges (bounds for
+// pruning), the sign changes inside each piece (where a relieving axle is
+// dropped or a lane patch ends), the exact positive and negative areas, the
+// loaded regions, and the extreme ordinates, overall and per span.
+//
+// Units: stations m; ordinates in the effect per unit load (m for moments,
+// dimensionless for shears and reactions); areas ordinate x m.
+//
+// One-sided values. A shear influence line jumps at its own section (and a
+// reaction or end shear at the end of the girder). A load "just left" of a
+// station takes the left limit there, "just right" the right limit; an
+// extreme next to a jump is such a limit (an axle an infinitesimal distance to
+// one side of the section), recorded with its Approach.
+#pragma once
+
+#include <cstddef>
+#include <cstdint>
+#include <string_view>
+#include <vector>
+
+#include "engine/analysis/influence_lines.h"
+#include "engine/analysis/piecewise_cubic.h"
+#include "engine/core/numeric.h"
+#include "engine/live_load/detail/cubic.h"
+#include "engine/live_load/effect_table.h"
+
+namespace tenthpoint::live_load {
+
+// How a load stands at a station: exactly there, or an infinitesimal
+// distance to its left or right (a one-sided limit at a jump).
+enum class Approach { exact, from_left, from_right };
+
+[[nodiscard]] std::string_view to_string(Approach approach);  // "exact", "from_left", "from_right"
+[[nodiscard]] std::optional<Approach> parse_approach(std::string_view text);
+
+// Stations closer than this are one station (m): a breakpoint of a moving
+// load and a knot it reaches, two simultaneous knot crossings.
+inline constexpr Real kStationTolerance = 1.0e-9;
+
+struct Interval {
+  Real start = 0;  // m
+  Real end = 0;    // m
+};
+
+// An extreme ordinate and where a unit load produces it.
+struct OrdinatePeak {
+  Real value = 0;    // ordinate (0 when the curve never has that sign)
+  Real station = 0;  // m
+  Approach approach = Approach::exact;
+};
+
+class EffectCurve {
+ public:
+  // `side` and `section` as analysis::point_load_ordinate: the cut of a shear
+  // curve (ShearSide::none for moments and reactions). `span_boundaries` are
+  // the support stations, ascending, first = start of the girder, last = end
+  // (m). Precondition: `curve` is not empty.
+  EffectCurve(analysis::PiecewiseCubic curve, analysis::ShearSide side, Real section,
+              const std::vector<Real>& span_boundaries);
+
+  [[nodiscard]] const analysis::PiecewiseCubic& curve() const { return curve_; }
+  [[nodiscard]] const std::vector<Real>& knots() const { return curve_.knots(); }
+  [[nodiscard]] std::size_t piece_count() const { return curve_.piece_count(); }
+  [[nodiscard]] const detail::Cubic& coefficients(std::size_t piece) const { return curve_.coefficients()[piece]; }
+  [[nodiscard]] Real piece_length(std::size_t piece) const { return lengths_[piece]; }
+  // Largest and smallest value of a piece on its closed interval (the
+  // one-sided limits at its ends included).
+  [[nodiscard]] Real piece_max(std::size_t piece) const { return piece_max_[piece]; }
+  [[nodiscard]] Real piece_min(std::size_t piece) const { return piece_min_[piece]; }
+  // Sign changes strictly inside a piece, as local coordinates t from the
+  // piece start (m), ascending.
+  [[nodiscard]] const Real* sign_changes(std::size_t piece) const { return &changes_[change_begin_[piece]]; }
+  [[nodiscard]] std::size_t sign_change_count(std::size_t piece) const {
+    return change_begin_[piece + 1] - change_begin_[piece];
+  }
+
+  // Ordinate for a unit load at x approached as stated; zero off the girder.
+  // `exact` follows analysis::point_load_ordinate (a load exactly at the
+  // section of a shear curve is on the far side of the cut).
+  [[nodiscard]] Real ordinate(Real x, Approach approach) const;
+
+  // Exact integrals of max(f, 0) and min(f, 0) over the girder (m x ordinate).
+  [[nodiscard]] Real positive_area() const { return positive_area_; }
+  [[nodiscard]] Real negative_area() const { return negative_area_; }
+  [[nodiscard]] Real area(Extreme e) const { return e == Extreme::maximum ? positive_area_ : negative_area_; }
+  // Where the curve is positive (maximum) or negative (minimum): the parts a
+  // lane load covers for that extreme, ascending and disjoint.
+  [[nodiscard]] const std::vector<Interval>& regions(Extreme e) const {
+    return e == Extreme::maximum ? positive_regions_ : negative_regions_;
+  }
+
+  // Largest (maximum) or smallest (minimum) ordinate over the girder, and
+  // over one span (0-based; spans as given by span_boundaries).
+  [[nodiscard]] const OrdinatePeak& peak(Extreme e) const { return e == Extreme::maximum ? max_ : min_; }
+  [[nodiscard]] const OrdinatePeak& span_peak(std::size_t span, Extreme e) const {
+    return e == Extreme::maximum ? span_max_[span] : span_min_[span];
+  }
+  [[nodiscard]] std::size_t span_count() const { return span_max_.size(); }
+  // Largest |ordinate|: the scale against which "zero" is judged.
+  [[nodiscard]] Real scale() const { return scale_; }
+  // Stations where the curve jumps (left limit != right limit), ascending.
+  [[nodiscard]] const std::vector<Real>& discontinuities() const { return discontinuities_; }
+
+ private:
+  analysis::PiecewiseCubic curve_;
+  analysis::ShearSide side_ = analysis::ShearSide::none;
+  Real section_ = 0;
+  std::vector<Real> lengths_;
+  std::vector<Real> piece_max_;
+  std::vector<Real> piece_min_;
+  std::vector<std::uint32_t> change_begin_;
+  std::vector<Real> changes_;
+  Real positive_area_ = 0;
+  Real negative_area_ = 0;
+  std::vector<Interval> positive_regions_;
+  std::vector<Interval> negative_regions_;
+  OrdinatePeak max_;
+  OrdinatePeak min_;
+  std::vector<OrdinatePeak> span_max_;
+  std::vector<OrdinatePeak> span_min_;
+  Real scale_ = 0;
+  std::vector<Real> discontinuities_;
+};
+
+}  // namespace tenthpoint::live_load
