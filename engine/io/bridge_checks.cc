@@ -23,16 +23,12 @@ YamlPath path_of(std::initializer_list<YamlPathStep> steps) { return YamlPath(st
 YamlPathStep key(std::string k) { return YamlPathStep{std::move(k), std::nullopt}; }
 YamlPathStep index(std::size_t i) { return YamlPathStep{"", i}; }
 
+// The bridge-file key of a section's description ("properties" when it has none).
 const char* description_kind(const model::SectionDefinition& section) {
   if (!section.description) return "properties";
-  switch (section.description->index()) {
-    case 0:
-      return "steel_i";
-    case 1:
-      return "rc_beam";
-    default:
-      return "ps_girder";
-  }
+  if (std::holds_alternative<model::SteelIGirder>(*section.description)) return "steel_i";
+  if (std::holds_alternative<model::ReinforcedConcreteBeam>(*section.description)) return "rc_beam";
+  return "ps_girder";
 }
 
 class Checker {

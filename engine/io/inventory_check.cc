@@ -1,6 +1,7 @@
 #include "engine/io/inventory_check.h"
 
 #include <algorithm>
+#include <array>
 #include <map>
 
 #include <fmt/format.h>
@@ -44,9 +45,13 @@ class PolicyCache {
     auto it = cache_.find(label);
     if (it == cache_.end()) {
       PolicyReadResult read = read_policy_for_bridge(bridge);
-      const bool missing_file =
-          !read.ok() && read.diagnostics.size() == 1 && read.diagnostics.front().where.file == bridge.source_file;
-      if (!missing_file) inventory.insert(inventory.end(), read.diagnostics.begin(), read.diagnostics.end());
+      // A policy that cannot be found is the bridge's problem (reported in its
+      // file by failure()); one with errors of its own is the inventory's,
+      // reported once however many bridges use it.
+      const bool about_the_reference =
+          std::all_of(read.diagnostics.begin(), read.diagnostics.end(),
+                      [&](const Diagnostic& d) { return d.where.file == bridge.source_file; });
+      if (!about_the_reference) inventory.insert(inventory.end(), read.diagnostics.begin(), read.diagnostics.end());
       it = cache_.emplace(label, std::move(read)).first;
     }
     return it->second.policy ? &*it->second.policy : nullptr;

@@ -489,6 +489,19 @@ class MessageBuilder {
     if (std::find(it->names.begin(), it->names.end(), name) == it->names.end()) it->names.push_back(name);
   }
 
+  // valijson reports missing fields alphabetically; the schema's own order
+  // (its "required" lists) reads more naturally.
+  static void order_as_required(std::vector<std::string>& names, const Schemas& schemas) {
+    std::vector<std::string> order;
+    for (const ojson* schema : schemas)
+      for (const std::string& name : string_list(schema->value("required", ojson::array()))) order.push_back(name);
+    const auto rank = [&](const std::string& name) {
+      return static_cast<std::size_t>(std::find(order.begin(), order.end(), name) - order.begin());
+    };
+    std::stable_sort(names.begin(), names.end(),
+                     [&](const std::string& a, const std::string& b) { return rank(a) < rank(b); });
+  }
+
   // A missing field that an unknown field's suggestion already names is the
   // same slip seen twice ("spann" for "spans"); report it once.
   void emit_missing() {
@@ -499,6 +512,7 @@ class MessageBuilder {
                suggested_.end();
       });
       if (m.names.empty()) continue;
+      order_as_required(m.names, navigator_.at(m.path));
       if (m.names.size() == 1) {
         emit(with_key(m.path, m.names.front()), fmt::format("missing field '{}'", m.names.front()),
              locate(root_, m.path));

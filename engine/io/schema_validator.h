@@ -5,10 +5,17 @@
 // message per problem; an unknown field names the allowed ones and the
 // nearest match for a typo.
 //
-// Validation is done by valijson, except the "pattern" keyword, which is
-// checked here because std::regex (valijson's engine) overflows the stack on
-// long strings. So a schema must not use "pattern" to choose between oneOf /
-// anyOf branches: patterns are applied wherever a property can land.
+// Validation is done by valijson on a typed JSON copy of the document (YAML
+// 1.2 core-schema types, so a quoted "36" is text, not a number). valijson's
+// own yaml-cpp adapter is not used: it reports every node as a string (a
+// mapping passes "type": "string"), it cannot tell "36" from 36, and in
+// valijson 1.0 it does not compile against the validator (its array iterator
+// lacks the operator-- that uniqueItems needs).
+//
+// The "pattern" keyword is checked here instead of by valijson, because
+// std::regex (valijson's engine) overflows the stack on long strings. So a
+// schema must not use "pattern" to choose between oneOf / anyOf branches:
+// patterns are applied wherever a property can land.
 #pragma once
 
 #include <memory>
