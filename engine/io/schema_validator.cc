@@ -67,8 +67,8 @@ json to_json(const YamlNode& node) {
 }
 
 // A copy of the schema without "pattern" keywords (checked separately, see
-// the header), collecting each pattern on the way. Walks keyword positions
-// only, so a property that happens to be named "pattern" survives.
+// the header) and without "format", collecting each pattern on the way.
+// Walks keyword positions only, so a property named "pattern" survives.
 json strip_patterns(const json& schema, std::set<std::string>& patterns) {
   if (!schema.is_object()) return schema;
   json out = json::object();
@@ -79,6 +79,9 @@ json strip_patterns(const json& schema, std::set<std::string>& patterns) {
       patterns.insert(value.get<std::string>());
       continue;
     }
+    // valijson checks "format" (date, time) with std::regex as well; the
+    // formats do not use it, and it is dropped so that it never could.
+    if (key == "format") continue;
     if ((key == "properties" || key == "definitions" || key == "patternProperties") && value.is_object()) {
       json map = json::object();
       for (auto p = value.begin(); p != value.end(); ++p) map[p.key()] = strip_patterns(p.value(), patterns);

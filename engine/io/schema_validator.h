@@ -15,7 +15,8 @@
 // The "pattern" keyword is checked here instead of by valijson, because
 // std::regex (valijson's engine) overflows the stack on long strings. So a
 // schema must not use "pattern" to choose between oneOf / anyOf branches:
-// patterns are applied wherever a property can land.
+// patterns are applied wherever a property can land. "format" is ignored
+// for the same reason (valijson checks it with std::regex too).
 #pragma once
 
 #include <memory>

@@ -30,15 +30,6 @@ const nlohmann::ordered_json& SchemaNavigator::resolve(const nlohmann::ordered_j
   return empty_schema();
 }
 
-std::string SchemaNavigator::definition_name(const nlohmann::ordered_json& schema) {
-  if (!schema.is_object()) return "";
-  auto ref = schema.find("$ref");
-  if (ref == schema.end() || !ref->is_string()) return "";
-  const std::string& target = ref->get_ref<const std::string&>();
-  const std::string prefix = "#/definitions/";
-  return target.rfind(prefix, 0) == 0 ? target.substr(prefix.size()) : "";
-}
-
 void SchemaNavigator::expand_into(const nlohmann::ordered_json& schema, std::vector<const nlohmann::ordered_json*>& out,
                                   int depth) const {
   if (depth > kMaxExpansionDepth) return;

@@ -23,10 +23,6 @@ class SchemaNavigator {
   // when it has no $ref. A dangling ref resolves to an empty schema.
   [[nodiscard]] const nlohmann::ordered_json& resolve(const nlohmann::ordered_json& schema) const;
 
-  // The name of the definition `schema` refers to ("id" for
-  // {"$ref": "#/definitions/id"}), or "" when it is not a ref.
-  [[nodiscard]] static std::string definition_name(const nlohmann::ordered_json& schema);
-
   // `schema` resolved, plus (recursively) the branches of its allOf, anyOf,
   // oneOf, then and else: everything that may constrain the same value.
   [[nodiscard]] std::vector<const nlohmann::ordered_json*> expand(const nlohmann::ordered_json& schema) const;
