@@ -13,22 +13,10 @@
 #include "engine/cli/console.h"
 #include "engine/core/atomic_file.h"
 #include "engine/core/units.h"
-#include "engine/io/bridge_reader.h"
-#include "engine/io/inventory_listing.h"
+#include "engine/io/inventory_check.h"
 
 namespace tenthpoint::cli {
 namespace {
-
-struct FileOutcome {
-  std::string file;
-  Diagnostics diagnostics;
-  std::optional<model::Bridge> bridge;
-
-  [[nodiscard]] const char* status() const {
-    if (!bridge) return "errors";
-    return count(diagnostics, Severity::warning) > 0 ? "warnings" : "valid";
-  }
-};
 
 nlohmann::json to_json(const Diagnostic& d) {
   return {{"severity", to_string(d.severity)}, {"file", d.where.file}, {"line", d.where.line},
@@ -43,27 +31,27 @@ std::string csv_field(const std::string& text) {
 }
 
 // One row per valid bridge: what an engineer scans to see the inventory.
-std::string summary_csv(const std::vector<FileOutcome>& outcomes) {
+std::string summary_csv(const std::vector<io::FileCheck>& files) {
   std::string out =
       "structure_id,name,file,units,spans,span_lengths,total_length,length_unit,material,composite,girders,"
       "method,latest_inspection,superstructure_condition,status\n";
-  for (const FileOutcome& o : outcomes) {
-    if (!o.bridge) {
-      out += fmt::format(",,{},,,,,,,,,,,,errors\n", csv_field(o.file));
+  for (const io::FileCheck& f : files) {
+    if (!f.bridge) {
+      out += fmt::format("{},,{},,,,,,,,,,,,{}\n", csv_field(f.structure_id), csv_field(f.path), io::to_string(f.status));
       continue;
     }
-    const model::Bridge& b = *o.bridge;
+    const model::Bridge& b = *f.bridge;
     const auto len = [&](Real v) { return units::from_internal(v, units::Quantity::length, b.units); };
     std::string spans;
     for (Real s : b.geometry.span_lengths) spans += (spans.empty() ? "" : " ") + fmt::format("{:.6g}", len(s));
     const model::Inspection* latest = b.latest_inspection();
     out += fmt::format("{},{},{},{},{},{},{:.6g},{},{},{},{},{},{},{},{}\n", csv_field(b.identity.structure_id),
-                       csv_field(b.identity.name), csv_field(o.file), units::to_string(b.units),
+                       csv_field(b.identity.name), csv_field(f.path), units::to_string(b.units),
                        b.geometry.span_lengths.size(), spans, len(b.geometry.total_length()),
                        units::label(units::Quantity::length, b.units), model::to_string(b.materials.kind),
                        b.materials.composite ? "yes" : "no", b.girder_count(), model::to_string(b.rating.method),
                        latest ? latest->date.to_iso() : "", latest ? std::to_string(latest->superstructure_condition) : "",
-                       o.status());
+                       io::to_string(f.status));
   }
   return out;
 }
@@ -80,51 +68,39 @@ class CheckCommand final : public Command {
   }
 
   int run() override {
-    const io::InventoryListing listing = io::list_inventory(paths_);
-    std::vector<FileOutcome> outcomes;
-    outcomes.reserve(listing.files.size());
-    for (const std::string& file : listing.files) {
-      io::BridgeReadResult read = io::read_bridge_file(file);
-      outcomes.push_back({file, std::move(read.diagnostics), std::move(read.bridge)});
-    }
-
-    std::size_t valid = 0, warned = 0, failed = 0;
-    for (const FileOutcome& o : outcomes) {
-      const std::string status = o.status();
-      if (status == "valid") ++valid;
-      else if (status == "warnings") ++warned;
-      else ++failed;
-    }
-    const bool listing_failed = has_errors(listing.diagnostics);
-    const bool ok = !listing_failed && failed == 0 && (!strict_ || warned == 0) && !outcomes.empty();
+    const io::InventoryCheck result = io::check_inventory(paths_);
+    const io::CheckTotals& t = result.totals;
+    const bool ok = result.ok() && (!strict_ || t.warnings == 0) && t.files > 0;
 
     nlohmann::json doc;
-    doc["bridges"] = outcomes.size();
-    doc["valid"] = valid;
-    doc["with_warnings"] = warned;
-    doc["with_errors"] = failed;
+    doc["bridges"] = t.files;
+    doc["valid"] = t.valid;
+    doc["with_warnings"] = t.with_warnings;
+    doc["with_errors"] = t.with_errors;
     doc["inventory_diagnostics"] = nlohmann::json::array();
-    for (const Diagnostic& d : listing.diagnostics) doc["inventory_diagnostics"].push_back(to_json(d));
+    for (const Diagnostic& d : result.inventory_diagnostics) doc["inventory_diagnostics"].push_back(to_json(d));
     doc["files"] = nlohmann::json::array();
-    for (const FileOutcome& o : outcomes) {
-      nlohmann::json f{{"file", o.file}, {"status", o.status()}, {"diagnostics", nlohmann::json::array()}};
-      if (o.bridge) f["structure_id"] = o.bridge->identity.structure_id;
-      for (const Diagnostic& d : o.diagnostics) f["diagnostics"].push_back(to_json(d));
-      doc["files"].push_back(std::move(f));
+    for (const io::FileCheck& f : result.files) {
+      nlohmann::json entry{{"file", f.path},
+                           {"structure_id", f.structure_id},
+                           {"status", io::to_string(f.status)},
+                           {"diagnostics", nlohmann::json::array()}};
+      for (const Diagnostic& d : f.diagnostics) entry["diagnostics"].push_back(to_json(d));
+      doc["files"].push_back(std::move(entry));
     }
 
     if (format_ == "json") {
       std::printf("%s\n", doc.dump(2).c_str());
     } else {
-      print_diagnostics(listing.diagnostics);
-      for (const FileOutcome& o : outcomes) print_diagnostics(o.diagnostics);
-      std::printf("%zu bridges: %zu valid, %zu valid with warnings, %zu with errors\n", outcomes.size(), valid, warned,
-                  failed);
-      if (outcomes.empty()) std::printf("no bridge files found\n");
+      print_diagnostics(result.inventory_diagnostics);
+      for (const io::FileCheck& f : result.files) print_diagnostics(f.diagnostics);
+      std::printf("%zu bridges: %zu valid, %zu valid with warnings, %zu with errors\n", t.files, t.valid,
+                  t.with_warnings, t.with_errors);
+      if (t.files == 0) std::printf("no bridge files found\n");
     }
     if (!out_.empty()) {
       write_file_atomically(std::filesystem::path(out_) / "check.json", doc.dump(2) + "\n");
-      write_file_atomically(std::filesystem::path(out_) / "inventory-summary.csv", summary_csv(outcomes));
+      write_file_atomically(std::filesystem::path(out_) / "inventory-summary.csv", summary_csv(result.files));
       if (format_ == "text") std::printf("wrote %s/check.json and %s/inventory-summary.csv\n", out_.c_str(), out_.c_str());
     }
     return ok ? kExitOk : kExitFindings;

@@ -154,6 +154,7 @@ InventoryCheck check_inventory(const std::vector<std::string>& paths, const Inve
         check_against_policy(bridge, check, policies, result.inventory_diagnostics, options.read.limits);
     }
     finish_file(check);
+    if (check.status != FileStatus::errors) check.bridge = std::move(read.bridge);
     result.files.push_back(std::move(check));
   }
   CheckTotals& t = result.totals;

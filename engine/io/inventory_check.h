@@ -30,6 +30,7 @@ struct FileCheck {
   Diagnostics diagnostics;  // in file order
   std::size_t errors = 0;
   std::size_t warnings = 0;
+  std::optional<model::Bridge> bridge;  // the record, when it read without errors (for summaries)
 };
 
 struct CheckTotals {
