@@ -90,6 +90,8 @@ GirderLayout girder_layout(const model::Bridge& bridge, const model::GirderLine&
   for (std::size_t i = 0; i < bridge.geometry.continuity.size(); ++i)
     if (bridge.geometry.continuity[i] == model::Continuity::hinge)
       layout.hinge_stations.push_back(bridge.geometry.support_station(i + 1));
+  for (Real x : bridge.geometry.hinges) layout.hinge_stations.push_back(x);
+  std::sort(layout.hinge_stations.begin(), layout.hinge_stations.end());
   for (const model::NamedPoint& p : bridge.points_of_interest) layout.named_points.push_back({p.label, p.station});
   // Section-loss regions get their own points so a rating sees the reduced
   // section where it starts and ends, not only at the nearest tenth point.

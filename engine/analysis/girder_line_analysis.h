@@ -8,6 +8,8 @@
 //        and every `hinge`;
 //   DC2, DW  long-term composite section (3n), continuous except at hinges;
 //   live load  short-term composite section (n), continuous except at hinges.
+// Hinges are the supports marked `hinge` plus geometry.hinges inside spans,
+// in every stage.
 // On a non-composite bridge all stages use the noncomposite section.
 //
 // Dead loads are turned into per-girder line loads here:

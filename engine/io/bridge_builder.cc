@@ -66,6 +66,7 @@ model::Geometry read_geometry(const FieldReader& r) {
     geometry.supports.push_back(model::parse<model::SupportKind>(s).value_or(model::SupportKind::roller));
   for (const std::string& c : r.texts("continuity"))
     geometry.continuity.push_back(model::parse<model::Continuity>(c).value_or(model::Continuity::continuous));
+  geometry.hinges = r.quantities("hinges", Quantity::length);
   geometry.where = r.where();
   return geometry;
 }

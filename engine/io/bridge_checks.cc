@@ -106,6 +106,21 @@ class Checker {
                        : fmt::format("expected {} continuity {} for {} spans (one per interior support), got {}",
                                      spans - 1, spans == 2 ? "entry" : "entries", spans, g.continuity.size()));
     }
+    // An internal hinge must lie strictly inside a span: one over a support
+    // is written as `continuity: hinge` there.
+    constexpr Real kTolerance = 1e-6;  // m; stations converted from feet carry round-off
+    for (std::size_t i = 0; i < g.hinges.size(); ++i) {
+      const Real x = g.hinges[i];
+      const YamlPath where = path_of({key("geometry"), key("hinges"), index(i)});
+      if (x <= kTolerance || x >= g.total_length() - kTolerance) {
+        error(where, fmt::format("hinge at {} is not inside the girder (0 to {})", length(x), length(g.total_length())));
+        continue;
+      }
+      for (std::size_t k = 1; k < spans; ++k)
+        if (std::abs(x - g.support_station(k)) <= kTolerance)
+          error(where, fmt::format("hinge at {} sits on support {}; write it as continuity: hinge for that support",
+                                   length(x), k + 1));
+    }
   }
 
   template <typename Item, typename IdOf>

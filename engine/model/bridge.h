@@ -49,6 +49,7 @@ struct Geometry {
   std::vector<Real> span_lengths;       // m, centre to centre of bearings
   std::vector<SupportKind> supports;    // one per support line: span_lengths.size() + 1
   std::vector<Continuity> continuity;   // one per interior support: span_lengths.size() - 1
+  std::vector<Real> hinges;             // m, internal hinges strictly inside spans (cantilever-suspended spans)
   SourceLocation where;
 
   [[nodiscard]] Real total_length() const;

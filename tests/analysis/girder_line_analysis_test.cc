@@ -157,3 +157,31 @@ TEST_CASE("points of interest and section-loss regions become analysis points", 
   point_at(a.live_influence, 11.0 * kFt);
   point_at(a.live_influence, 37.0 * kFt);
 }
+
+TEST_CASE("hinges inside a span make a suspended span that statics alone settles", "[analysis][builder]") {
+  // 50-100-50 ft with hinges 20 ft into the middle span from each pier: the
+  // 60 ft suspended span is simply supported on the cantilever tips (a
+  // statically determinate cantilever-suspended girder).
+  model::Bridge b = two_span_bridge(model::Continuity::continuous);
+  b.geometry.span_lengths = {50 * kFt, 100 * kFt, 50 * kFt};
+  b.geometry.supports = {model::SupportKind::pin, model::SupportKind::roller, model::SupportKind::roller,
+                         model::SupportKind::roller};
+  b.geometry.continuity = {model::Continuity::continuous, model::Continuity::continuous};
+  b.geometry.hinges = {70 * kFt, 130 * kFt};
+  for (model::GirderLine& g : b.girders) g.segments = {{0, 200 * kFt, "S", std::nullopt, std::nullopt, {}}};
+  const Real w = 1.0 * kKip / kFt;
+  b.dead_loads = {load(model::DeadLoadComponent::dc2, model::LoadScope::per_girder, model::DistributionRule::equal,
+                       model::UniformLoad{w, {}, {}})};
+  const GirderLineAnalysis a = analyse_girder_line(b, b.girders[0]);
+  const auto& dc2 = a.component(model::DeadLoadComponent::dc2).effects;
+  const std::size_t hinge = point_at(a.live_influence, 70 * kFt);
+  const std::size_t pier = point_at(a.live_influence, 50 * kFt);
+  const std::size_t mid = point_at(a.live_influence, 100 * kFt);
+  // Statics (textbook): hinge shear = w*60/2 = 30w; pier moment =
+  // -(30w*20 + w*20^2/2) = -800w kip-ft; suspended-span centre w*60^2/8.
+  const Real ft2 = kFt * kFt;
+  TP_CHECK_CLOSE(dc2.moment[hinge], 0.0, kExact, w * 1e4 * ft2);
+  TP_CHECK_CLOSE(dc2.moment[pier], -800 * w * ft2, kExact, w * 1e4 * ft2);
+  TP_CHECK_CLOSE(dc2.moment[mid], w * 3600 * ft2 / 8, kExact, w * 1e4 * ft2);
+  CHECK(a.live_model->degree_of_indeterminacy() == 0);
+}

@@ -294,3 +294,22 @@ TEST_CASE("a single span with continuity entries and a multi-span without them a
   CHECK(find_diagnostic(read_bridge_text(two, "x.yaml").diagnostics, Severity::error,
                         "missing field 'continuity': 2 spans need 1 entry") != nullptr);
 }
+
+TEST_CASE("hinges inside spans are read in the file's units and must not sit on a support", "[io][bridge]") {
+  std::string text = minimal_bridge();
+  text.replace(text.find("spans: [80.0], supports: [pin, roller]"), 38,
+               "spans: [40.0, 40.0], supports: [pin, roller, roller], continuity: [continuous], hinges: [52.0]");
+  text.replace(text.find("end: 80"), 7, "end: 80");
+  const BridgeReadResult good = read_bridge_text(text, "x.yaml");
+  REQUIRE(good.ok());
+  REQUIRE(good.bridge->geometry.hinges.size() == 1);
+  CHECK(good.bridge->geometry.hinges[0] == Approx(52.0 * 0.3048).epsilon(1e-12));  // ft to m, exact definition
+
+  std::string on_support = text;
+  on_support.replace(on_support.find("hinges: [52.0]"), 14, "hinges: [40.0]");
+  const BridgeReadResult bad = read_bridge_text(on_support, "x.yaml");
+  const Diagnostic* d = find_diagnostic(bad.diagnostics, Severity::error, "sits on support 2");
+  REQUIRE(d != nullptr);
+  CHECK(d->field == "geometry.hinges[0]");
+  CHECK(d->where.line == 5);
+}
