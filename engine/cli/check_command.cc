@@ -99,9 +99,11 @@ class CheckCommand final : public Command {
       if (t.files == 0) std::printf("no bridge files found\n");
     }
     if (!out_.empty()) {
-      write_file_atomically(std::filesystem::path(out_) / "check.json", doc.dump(2) + "\n");
-      write_file_atomically(std::filesystem::path(out_) / "inventory-summary.csv", summary_csv(result.files));
-      if (format_ == "text") std::printf("wrote %s/check.json and %s/inventory-summary.csv\n", out_.c_str(), out_.c_str());
+      const std::filesystem::path check_file = std::filesystem::path(out_) / "check.json";
+      const std::filesystem::path summary_file = std::filesystem::path(out_) / "inventory-summary.csv";
+      write_file_atomically(check_file, doc.dump(2) + "\n");
+      write_file_atomically(summary_file, summary_csv(result.files));
+      if (format_ == "text") std::printf("wrote %s and %s\n", check_file.c_str(), summary_file.c_str());
     }
     return ok ? kExitOk : kExitFindings;
   }
