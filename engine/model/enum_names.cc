@@ -1,15 +1,12 @@
 #include <array>
 #include <utility>
 
+#include "engine/core/name_table.h"
 #include "engine/model/enums.h"
 #include "engine/model/given_capacity.h"
 
 namespace tenthpoint::model {
 namespace {
-
-// One table per enum: the only place a spelling is written down.
-template <typename Enum, std::size_t N>
-using NameTable = std::array<std::pair<Enum, std::string_view>, N>;
 
 constexpr NameTable<SupportKind, 3> kSupportKind{{{SupportKind::pin, "pin"},
                                                   {SupportKind::roller, "roller"},
@@ -47,20 +44,6 @@ constexpr NameTable<SectionElement, 7> kSectionElement{{{SectionElement::top_fla
 constexpr NameTable<ForceEffect, 2> kForceEffect{{{ForceEffect::moment, "moment"}, {ForceEffect::shear, "shear"}}};
 constexpr NameTable<CapacitySource, 2> kCapacitySource{
     {{CapacitySource::given, "given"}, {CapacitySource::computed, "computed"}}};
-
-template <typename Enum, std::size_t N>
-std::string_view name_of(const NameTable<Enum, N>& table, Enum value) {
-  for (const auto& [v, name] : table)
-    if (v == value) return name;
-  return "?";
-}
-
-template <typename Enum, std::size_t N>
-std::optional<Enum> value_of(const NameTable<Enum, N>& table, std::string_view text) {
-  for (const auto& [v, name] : table)
-    if (name == text) return v;
-  return std::nullopt;
-}
 
 }  // namespace
 

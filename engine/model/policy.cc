@@ -1,3 +1,4 @@
+#include "engine/core/name_table.h"
 #include "engine/model/policy.h"
 
 #include <algorithm>
@@ -7,9 +8,6 @@
 
 namespace tenthpoint::model {
 namespace {
-
-template <typename Enum, std::size_t N>
-using NameTable = std::array<std::pair<Enum, std::string_view>, N>;
 
 constexpr NameTable<RatingLevel, 2> kRatingLevel{
     {{RatingLevel::inventory, "inventory"}, {RatingLevel::operating, "operating"}}};
@@ -22,20 +20,6 @@ constexpr NameTable<PermitDistribution, 2> kPermitDistribution{
 constexpr NameTable<EmergencyLanes, 3> kEmergencyLanes{{{EmergencyLanes::alone_in_one_lane, "alone_in_one_lane"},
                                                         {EmergencyLanes::every_lane, "every_lane"},
                                                         {EmergencyLanes::with_legal_loads, "with_legal_loads"}}};
-
-template <typename Enum, std::size_t N>
-std::string_view name_of(const NameTable<Enum, N>& table, Enum value) {
-  for (const auto& [v, name] : table)
-    if (v == value) return name;
-  return "?";
-}
-
-template <typename Enum, std::size_t N>
-std::optional<Enum> value_of(const NameTable<Enum, N>& table, std::string_view text) {
-  for (const auto& [v, name] : table)
-    if (name == text) return v;
-  return std::nullopt;
-}
 
 Real last_or_indexed(const std::vector<Real>& values, int count) {
   assert(!values.empty() && count >= 1);

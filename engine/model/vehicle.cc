@@ -5,10 +5,12 @@
 #include <numeric>
 #include <utility>
 
+#include "engine/core/name_table.h"
+
 namespace tenthpoint::model {
 namespace {
 
-constexpr std::array<std::pair<VehicleCategory, std::string_view>, 6> kVehicleCategory{{
+constexpr NameTable<VehicleCategory, 6> kVehicleCategory{{
     {VehicleCategory::design, "design"},
     {VehicleCategory::legal, "legal"},
     {VehicleCategory::specialized_hauling, "specialized_hauling"},
@@ -17,7 +19,7 @@ constexpr std::array<std::pair<VehicleCategory, std::string_view>, 6> kVehicleCa
     {VehicleCategory::lfr_design, "lfr_design"},
 }};
 
-constexpr std::array<std::pair<LoadEffect, std::string_view>, 5> kLoadEffect{{
+constexpr NameTable<LoadEffect, 5> kLoadEffect{{
     {LoadEffect::positive_moment, "positive_moment"},
     {LoadEffect::negative_moment, "negative_moment"},
     {LoadEffect::shear, "shear"},
@@ -25,31 +27,17 @@ constexpr std::array<std::pair<LoadEffect, std::string_view>, 5> kLoadEffect{{
     {LoadEffect::interior_reaction, "interior_reaction"},
 }};
 
-template <typename Table, typename Enum>
-std::string_view name_in(const Table& table, Enum value) {
-  for (const auto& [v, name] : table)
-    if (v == value) return name;
-  return "?";
-}
-
-template <typename Table>
-auto value_in(const Table& table, std::string_view text) -> std::optional<typename Table::value_type::first_type> {
-  for (const auto& [v, name] : table)
-    if (name == text) return v;
-  return std::nullopt;
-}
-
 }  // namespace
 
-std::string_view to_string(VehicleCategory v) { return name_in(kVehicleCategory, v); }
-std::string_view to_string(LoadEffect v) { return name_in(kLoadEffect, v); }
+std::string_view to_string(VehicleCategory v) { return name_of(kVehicleCategory, v); }
+std::string_view to_string(LoadEffect v) { return name_of(kLoadEffect, v); }
 template <>
 std::optional<VehicleCategory> parse(std::string_view t) {
-  return value_in(kVehicleCategory, t);
+  return value_of(kVehicleCategory, t);
 }
 template <>
 std::optional<LoadEffect> parse(std::string_view t) {
-  return value_in(kLoadEffect, t);
+  return value_of(kLoadEffect, t);
 }
 
 Real AxleTrain::gross_weight() const { return std::accumulate(axle_weights.begin(), axle_weights.end(), Real{0}); }
