@@ -18,12 +18,14 @@ std::vector<NamedCurve> named_curves(const InfluenceLines& lines) {
       out.push_back({"shear left of " + where, "N/N", &il.shear_left, "shear_left", where, x});
       out.push_back({"shear right of " + where, "N/N", &il.shear_right, "shear_right", where, x});
     }
-    if (!il.deflection.empty()) out.push_back({"deflection at " + where, "m/N", &il.deflection, "deflection", where, x});
+    if (!il.deflection.empty())
+      out.push_back({"deflection at " + where, "m/N", &il.deflection, "deflection", where, x});
   }
   for (const SupportInfluenceLines& s : lines.supports) {
     const std::string where = fmt::format("support {}", s.support_line + 1);
     out.push_back({"reaction at " + where, "N/N", &s.reaction, "reaction", where, s.station});
-    if (!s.moment.empty()) out.push_back({"moment at " + where, "N*m/N", &s.moment, "support_moment", where, s.station});
+    if (!s.moment.empty())
+      out.push_back({"moment at " + where, "N*m/N", &s.moment, "support_moment", where, s.station});
   }
   return out;
 }

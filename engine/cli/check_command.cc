@@ -20,7 +20,7 @@ namespace {
 
 nlohmann::json to_json(const Diagnostic& d) {
   return {{"severity", to_string(d.severity)}, {"file", d.where.file}, {"line", d.where.line},
-          {"column", d.where.column},          {"field", d.field},      {"message", d.message}};
+          {"column", d.where.column},          {"field", d.field},     {"message", d.message}};
 }
 
 std::string csv_field(const std::string& text) {
@@ -37,7 +37,8 @@ std::string summary_csv(const std::vector<io::FileCheck>& files) {
       "method,latest_inspection,superstructure_condition,status\n";
   for (const io::FileCheck& f : files) {
     if (!f.bridge) {
-      out += fmt::format("{},,{},,,,,,,,,,,,{}\n", csv_field(f.structure_id), csv_field(f.path), io::to_string(f.status));
+      out +=
+          fmt::format("{},,{},,,,,,,,,,,,{}\n", csv_field(f.structure_id), csv_field(f.path), io::to_string(f.status));
       continue;
     }
     const model::Bridge& b = *f.bridge;
@@ -50,8 +51,8 @@ std::string summary_csv(const std::vector<io::FileCheck>& files) {
                        b.geometry.span_lengths.size(), spans, len(b.geometry.total_length()),
                        units::label(units::Quantity::length, b.units), model::to_string(b.materials.kind),
                        b.materials.composite ? "yes" : "no", b.girder_count(), model::to_string(b.rating.method),
-                       latest ? latest->date.to_iso() : "", latest ? std::to_string(latest->superstructure_condition) : "",
-                       io::to_string(f.status));
+                       latest ? latest->date.to_iso() : "",
+                       latest ? std::to_string(latest->superstructure_condition) : "", io::to_string(f.status));
   }
   return out;
 }

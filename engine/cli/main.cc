@@ -3,11 +3,11 @@
 #include <spdlog/sinks/stdout_color_sinks.h>
 #include <spdlog/spdlog.h>
 
+#include <unistd.h>
 #include <CLI/CLI.hpp>
 #include <cstdio>
 #include <exception>
 #include <string>
-#include <unistd.h>
 #include <vector>
 
 #include "engine/cli/command.h"
@@ -25,9 +25,10 @@ spdlog::level::level_enum parse_level(const std::string& name) {
 int main(int argc, char** argv) {
   using namespace tenthpoint::cli;
 
-  CLI::App app{"tenthpoint: batch load rating of multi-span highway bridges.\n"
-               "Results support, and never replace, the judgment of a licensed engineer.",
-               "tenthpoint"};
+  CLI::App app{
+      "tenthpoint: batch load rating of multi-span highway bridges.\n"
+      "Results support, and never replace, the judgment of a licensed engineer.",
+      "tenthpoint"};
   app.set_version_flag("--version", std::string("tenthpoint ") + tenthpoint::kEngineVersion);
   app.require_subcommand(1);
   std::string log_level = "warn";

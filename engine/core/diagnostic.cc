@@ -8,8 +8,10 @@ namespace tenthpoint {
 
 const char* to_string(Severity severity) {
   switch (severity) {
-    case Severity::error: return "error";
-    case Severity::warning: return "warning";
+    case Severity::error:
+      return "error";
+    case Severity::warning:
+      return "warning";
   }
   return "error";
 }

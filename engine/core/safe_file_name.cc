@@ -8,8 +8,8 @@ std::string safe_file_name(std::string_view text) {
   out.reserve(std::min(text.size(), kMaxLength));
   for (char c : text) {
     if (out.size() == kMaxLength) break;
-    const bool safe = (c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || (c >= '0' && c <= '9') || c == '-' ||
-                      c == '_' || c == '.';
+    const bool safe =
+        (c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || (c >= '0' && c <= '9') || c == '-' || c == '_' || c == '.';
     out += safe ? c : '_';
   }
   if (out.empty()) return "_";

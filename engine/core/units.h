@@ -43,8 +43,8 @@ inline constexpr Real kPi = 3.14159265358979323846;
 inline constexpr Real kDegree = kPi / 180.0;  // rad
 // US "ton" in bridge posting is the short ton of 2000 lb; SI postings use the
 // tonne-force (1000 kg x standard gravity 9.80665 m/s^2).
-inline constexpr Real kShortTon = 2.0 * kKip;        // N
-inline constexpr Real kTonneForce = 9806.65;         // N
+inline constexpr Real kShortTon = 2.0 * kKip;  // N
+inline constexpr Real kTonneForce = 9806.65;   // N
 
 enum class UnitSystem { us, si };
 

@@ -113,7 +113,8 @@ class Checker {
       const Real x = g.hinges[i];
       const YamlPath where = path_of({key("geometry"), key("hinges"), index(i)});
       if (x <= kTolerance || x >= g.total_length() - kTolerance) {
-        error(where, fmt::format("hinge at {} is not inside the girder (0 to {})", length(x), length(g.total_length())));
+        error(where,
+              fmt::format("hinge at {} is not inside the girder (0 to {})", length(x), length(g.total_length())));
         continue;
       }
       for (std::size_t k = 1; k < spans; ++k)

@@ -38,18 +38,18 @@ struct Identity {
 };
 
 struct Traffic {
-  std::optional<Real> adtt;   // trucks per day in one direction; absent = unknown
-  Real clear_roadway_width = 0;  // m, curb to curb
-  int lanes = 1;                 // design lanes
-  bool lanes_from_width = false; // true when lanes was derived (LRFD 3.6.1.1.1)
+  std::optional<Real> adtt;       // trucks per day in one direction; absent = unknown
+  Real clear_roadway_width = 0;   // m, curb to curb
+  int lanes = 1;                  // design lanes
+  bool lanes_from_width = false;  // true when lanes was derived (LRFD 3.6.1.1.1)
 };
 
 struct Geometry {
-  Real skew = 0;                        // rad, 0 = square
-  std::vector<Real> span_lengths;       // m, centre to centre of bearings
-  std::vector<SupportKind> supports;    // one per support line: span_lengths.size() + 1
-  std::vector<Continuity> continuity;   // one per interior support: span_lengths.size() - 1
-  std::vector<Real> hinges;             // m, internal hinges strictly inside spans (cantilever-suspended spans)
+  Real skew = 0;                       // rad, 0 = square
+  std::vector<Real> span_lengths;      // m, centre to centre of bearings
+  std::vector<SupportKind> supports;   // one per support line: span_lengths.size() + 1
+  std::vector<Continuity> continuity;  // one per interior support: span_lengths.size() - 1
+  std::vector<Real> hinges;            // m, internal hinges strictly inside spans (cantilever-suspended spans)
   SourceLocation where;
 
   [[nodiscard]] Real total_length() const;

@@ -31,9 +31,9 @@ struct PointLoad {
 // unit weight, over the whole girder. Whether it was measured in the field
 // sets its Strength I load factor (MBE Table 6A.4.2.2-1).
 struct WearingSurface {
-  Real thickness = 0;          // m
-  Real unit_weight = 0;        // N/m^3
-  std::optional<Real> width;   // m; absent = the clear roadway width
+  Real thickness = 0;         // m
+  Real unit_weight = 0;       // N/m^3
+  std::optional<Real> width;  // m; absent = the clear roadway width
   bool field_measured = false;
 };
 

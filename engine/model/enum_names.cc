@@ -8,9 +8,8 @@
 namespace tenthpoint::model {
 namespace {
 
-constexpr NameTable<SupportKind, 3> kSupportKind{{{SupportKind::pin, "pin"},
-                                                  {SupportKind::roller, "roller"},
-                                                  {SupportKind::fixed, "fixed"}}};
+constexpr NameTable<SupportKind, 3> kSupportKind{
+    {{SupportKind::pin, "pin"}, {SupportKind::roller, "roller"}, {SupportKind::fixed, "fixed"}}};
 constexpr NameTable<Continuity, 3> kContinuity{{{Continuity::continuous, "continuous"},
                                                 {Continuity::hinge, "hinge"},
                                                 {Continuity::simple_made_continuous, "simple_made_continuous"}}};
@@ -61,19 +60,58 @@ std::string_view to_string(SectionElement v) { return name_of(kSectionElement, v
 std::string_view to_string(ForceEffect v) { return name_of(kForceEffect, v); }
 std::string_view to_string(CapacitySource v) { return name_of(kCapacitySource, v); }
 
-template <> std::optional<SupportKind> parse(std::string_view t) { return value_of(kSupportKind, t); }
-template <> std::optional<Continuity> parse(std::string_view t) { return value_of(kContinuity, t); }
-template <> std::optional<GirderPosition> parse(std::string_view t) { return value_of(kGirderPosition, t); }
-template <> std::optional<MaterialKind> parse(std::string_view t) { return value_of(kMaterialKind, t); }
-template <> std::optional<RatingMethod> parse(std::string_view t) { return value_of(kRatingMethod, t); }
-template <> std::optional<DeadLoadComponent> parse(std::string_view t) { return value_of(kDeadLoadComponent, t); }
-template <> std::optional<SectionStage> parse(std::string_view t) { return value_of(kSectionStage, t); }
-template <> std::optional<Taper> parse(std::string_view t) { return value_of(kTaper, t); }
-template <> std::optional<LoadScope> parse(std::string_view t) { return value_of(kLoadScope, t); }
-template <> std::optional<DistributionRule> parse(std::string_view t) { return value_of(kDistributionRule, t); }
-template <> std::optional<SectionElement> parse(std::string_view t) { return value_of(kSectionElement, t); }
-template <> std::optional<ForceEffect> parse(std::string_view t) { return value_of(kForceEffect, t); }
-template <> std::optional<CapacitySource> parse(std::string_view t) { return value_of(kCapacitySource, t); }
+template <>
+std::optional<SupportKind> parse(std::string_view t) {
+  return value_of(kSupportKind, t);
+}
+template <>
+std::optional<Continuity> parse(std::string_view t) {
+  return value_of(kContinuity, t);
+}
+template <>
+std::optional<GirderPosition> parse(std::string_view t) {
+  return value_of(kGirderPosition, t);
+}
+template <>
+std::optional<MaterialKind> parse(std::string_view t) {
+  return value_of(kMaterialKind, t);
+}
+template <>
+std::optional<RatingMethod> parse(std::string_view t) {
+  return value_of(kRatingMethod, t);
+}
+template <>
+std::optional<DeadLoadComponent> parse(std::string_view t) {
+  return value_of(kDeadLoadComponent, t);
+}
+template <>
+std::optional<SectionStage> parse(std::string_view t) {
+  return value_of(kSectionStage, t);
+}
+template <>
+std::optional<Taper> parse(std::string_view t) {
+  return value_of(kTaper, t);
+}
+template <>
+std::optional<LoadScope> parse(std::string_view t) {
+  return value_of(kLoadScope, t);
+}
+template <>
+std::optional<DistributionRule> parse(std::string_view t) {
+  return value_of(kDistributionRule, t);
+}
+template <>
+std::optional<SectionElement> parse(std::string_view t) {
+  return value_of(kSectionElement, t);
+}
+template <>
+std::optional<ForceEffect> parse(std::string_view t) {
+  return value_of(kForceEffect, t);
+}
+template <>
+std::optional<CapacitySource> parse(std::string_view t) {
+  return value_of(kCapacitySource, t);
+}
 
 bool is_steel(MaterialKind kind) {
   return kind == MaterialKind::rolled_steel || kind == MaterialKind::welded_plate_girder ||

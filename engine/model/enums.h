@@ -59,7 +59,6 @@ enum class SectionElement { top_flange, bottom_flange, web, cover_plate, bars, s
 // The force effect a distribution factor or capacity applies to.
 enum class ForceEffect { moment, shear };
 
-
 std::string_view to_string(SupportKind v);
 std::string_view to_string(Continuity v);
 std::string_view to_string(GirderPosition v);

@@ -18,8 +18,8 @@ namespace tenthpoint::model {
 // one section; a non-prismatic (haunched) segment names the section at each
 // end and how the depth varies between them.
 struct Segment {
-  Real start = 0;  // m
-  Real end = 0;    // m, > start
+  Real start = 0;                          // m
+  Real end = 0;                            // m, > start
   std::string section;                     // section at `start` (the whole segment if prismatic)
   std::optional<std::string> end_section;  // section at `end`; set only for a non-prismatic segment
   std::optional<Taper> taper;              // set exactly when end_section is set

@@ -11,15 +11,15 @@
 namespace tenthpoint::model {
 
 struct Steel {
-  Real yield_strength = 0;                 // Fy
-  std::optional<Real> tensile_strength;    // Fu
-  Real modulus = 200.0e9;                  // Es; 29000 ksi (AASHTO LRFD 6.4.1) when read from a US file
+  Real yield_strength = 0;               // Fy
+  std::optional<Real> tensile_strength;  // Fu
+  Real modulus = 200.0e9;                // Es; 29000 ksi (AASHTO LRFD 6.4.1) when read from a US file
 };
 
 struct Concrete {
-  Real compressive_strength = 0;   // f'c
-  std::optional<Real> modulus;     // Ec; absent = AASHTO LRFD 5.4.2.4 from f'c and unit weight
-  Real unit_weight = 0;            // wc, for dead load and for Ec
+  Real compressive_strength = 0;  // f'c
+  std::optional<Real> modulus;    // Ec; absent = AASHTO LRFD 5.4.2.4 from f'c and unit weight
+  Real unit_weight = 0;           // wc, for dead load and for Ec
 };
 
 struct Reinforcement {
@@ -28,9 +28,9 @@ struct Reinforcement {
 };
 
 struct PrestressingSteel {
-  Real tensile_strength = 0;              // fpu
-  std::optional<Real> yield_strength;     // fpy; absent = 0.9 fpu (low relaxation, LRFD Table 5.4.4.1-1)
-  Real modulus = 196.5e9;                 // Ep; 28500 ksi (LRFD 5.4.4.2)
+  Real tensile_strength = 0;           // fpu
+  std::optional<Real> yield_strength;  // fpy; absent = 0.9 fpu (low relaxation, LRFD Table 5.4.4.1-1)
+  Real modulus = 196.5e9;              // Ep; 28500 ksi (LRFD 5.4.4.2)
   bool low_relaxation = true;
 };
 

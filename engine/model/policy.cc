@@ -1,5 +1,5 @@
-#include "engine/core/name_table.h"
 #include "engine/model/policy.h"
+#include "engine/core/name_table.h"
 
 #include <algorithm>
 #include <array>

@@ -21,8 +21,8 @@ namespace tenthpoint::model {
 // Elastic properties of one stage's section, transformed to the girder
 // material for composite stages. Section moduli are positive magnitudes.
 struct ElasticSection {
-  Real area = 0;                              // m^2
-  Real inertia = 0;                           // m^4, about the stage's neutral axis
+  Real area = 0;                               // m^2
+  Real inertia = 0;                            // m^4, about the stage's neutral axis
   std::optional<Real> section_modulus_top;     // m^3, top of girder
   std::optional<Real> section_modulus_bottom;  // m^3, bottom of girder
   std::optional<Real> section_modulus_deck;    // m^3, top of deck (composite stages only)
@@ -88,11 +88,11 @@ struct StrandLayer {
 // (standard shapes are tabulated by their owners); the composite stages are
 // computed with the deck.
 struct PrestressedGirder {
-  std::string shape;  // e.g. "AASHTO Type III"
-  Real height = 0;    // m
-  Real web_width = 0; // m
-  Real area = 0;      // m^2, gross precast section
-  Real inertia = 0;   // m^4, gross precast section
+  std::string shape;              // e.g. "AASHTO Type III"
+  Real height = 0;                // m
+  Real web_width = 0;             // m
+  Real area = 0;                  // m^2, gross precast section
+  Real inertia = 0;               // m^4, gross precast section
   Real centroid_from_bottom = 0;  // m, yb
   std::vector<StrandLayer> strands;
   std::optional<Real> effective_prestress;  // Pa, fpe after all losses; absent = estimate (LRFD 5.9.3.3)
@@ -104,9 +104,9 @@ using SectionDescription = std::variant<SteelIGirder, ReinforcedConcreteBeam, Pr
 
 // The cast-in-place deck acting with the girder.
 struct DeckSlab {
-  Real thickness = 0;        // m, structural thickness (wearing surface excluded)
-  Real effective_width = 0;  // m, AASHTO LRFD 4.6.2.6
-  Real haunch = 0;           // m, concrete between girder top and deck soffit
+  Real thickness = 0;                       // m, structural thickness (wearing surface excluded)
+  Real effective_width = 0;                 // m, AASHTO LRFD 4.6.2.6
+  Real haunch = 0;                          // m, concrete between girder top and deck soffit
   std::vector<BarLayer> longitudinal_bars;  // depth measured from the top of the deck
 };
 

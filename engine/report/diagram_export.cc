@@ -83,11 +83,12 @@ std::string diagrams_csv(const std::vector<analysis::GirderLineAnalysis>& girder
       for (std::size_t i = 0; i < points.size() && i < c.effects.moment.size(); ++i) {
         const std::string label = csv_field(points[i].label());
         const Real x = len(points[i].station);
-        out += fmt::format("{},dead_load,{} moment,{},{:.6g},{:.6g},{:.9g},{}\n", csv_field(g.girder_id), component,
-                           label, x, x, units::from_internal(tidy(c.effects.moment[i], m_scale), Quantity::moment, system),
-                           units::label(Quantity::moment, system));
-        out += fmt::format("{},dead_load,{} shear_left,{},{:.6g},{:.6g},{:.9g},{}\n", csv_field(g.girder_id),
-                           component, label, x, x,
+        out +=
+            fmt::format("{},dead_load,{} moment,{},{:.6g},{:.6g},{:.9g},{}\n", csv_field(g.girder_id), component, label,
+                        x, x, units::from_internal(tidy(c.effects.moment[i], m_scale), Quantity::moment, system),
+                        units::label(Quantity::moment, system));
+        out += fmt::format("{},dead_load,{} shear_left,{},{:.6g},{:.6g},{:.9g},{}\n", csv_field(g.girder_id), component,
+                           label, x, x,
                            units::from_internal(tidy(c.effects.shear_left[i], v_scale), Quantity::force, system),
                            units::label(Quantity::force, system));
         out += fmt::format("{},dead_load,{} shear_right,{},{:.6g},{:.6g},{:.9g},{}\n", csv_field(g.girder_id),
@@ -131,7 +132,10 @@ std::string diagrams_json(const std::vector<analysis::GirderLineAnalysis>& girde
         xs.push_back(len(s.stations[k]));
         ys.push_back(units::from_internal(tidy(s.values[k], scale), q, system));
       }
-      curves.push_back({{"curve", c.effect}, {"point", c.where}, {"point_station", len(c.station)}, {"x", std::move(xs)},
+      curves.push_back({{"curve", c.effect},
+                        {"point", c.where},
+                        {"point_station", len(c.station)},
+                        {"x", std::move(xs)},
                         {"value", std::move(ys)}});
     });
     girder["influence_lines"] = std::move(curves);
@@ -142,7 +146,8 @@ std::string diagrams_json(const std::vector<analysis::GirderLineAnalysis>& girde
       const Real v_scale = std::max(largest(c.effects.shear_left), largest(c.effects.shear_right));
       for (Real v : c.effects.moment) m.push_back(units::from_internal(tidy(v, m_scale), Quantity::moment, system));
       for (Real v : c.effects.shear_left) vl.push_back(units::from_internal(tidy(v, v_scale), Quantity::force, system));
-      for (Real v : c.effects.shear_right) vr.push_back(units::from_internal(tidy(v, v_scale), Quantity::force, system));
+      for (Real v : c.effects.shear_right)
+        vr.push_back(units::from_internal(tidy(v, v_scale), Quantity::force, system));
       for (Real v : c.effects.reactions) r.push_back(units::from_internal(v, Quantity::force, system));
       dead.push_back({{"component", std::string(model::to_string(c.component))},
                       {"moment", std::move(m)},

@@ -39,8 +39,10 @@ model::Bridge two_span_bridge(model::Continuity continuity) {
   b.materials.kind = model::MaterialKind::prestressed_concrete;
   b.materials.composite = true;
   // E only scales EI uniformly here, so its value does not change any result.
-  b.materials.girder_concrete = model::Concrete{6.0 * units::kKsi, 5000 * units::kKsi, 0.150 * units::kKip / std::pow(kFt, 3)};
-  b.materials.deck_concrete = model::Concrete{4.0 * units::kKsi, 3600 * units::kKsi, 0.150 * units::kKip / std::pow(kFt, 3)};
+  b.materials.girder_concrete =
+      model::Concrete{6.0 * units::kKsi, 5000 * units::kKsi, 0.150 * units::kKip / std::pow(kFt, 3)};
+  b.materials.deck_concrete =
+      model::Concrete{4.0 * units::kKsi, 3600 * units::kKsi, 0.150 * units::kKip / std::pow(kFt, 3)};
   model::SectionDefinition s;
   s.id = "S";
   s.properties = model::SectionProperties{prismatic(0.05), prismatic(0.12), prismatic(0.18), std::nullopt};

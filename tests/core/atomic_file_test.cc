@@ -33,6 +33,5 @@ TEST_CASE("an atomic write replaces the file whole and leaves no temporary behin
 }
 
 TEST_CASE("an atomic write into an unwritable place fails loudly and keeps the old file", "[core][atomic_file]") {
-  CHECK_THROWS_WITH(tenthpoint::write_file_atomically("/proc/tenthpoint-no/such.csv", "x"),
-                    Catch::Contains("cannot"));
+  CHECK_THROWS_WITH(tenthpoint::write_file_atomically("/proc/tenthpoint-no/such.csv", "x"), Catch::Contains("cannot"));
 }

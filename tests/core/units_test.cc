@@ -10,9 +10,9 @@ using namespace tenthpoint::units;
 // Exact definitions: 1 ft = 0.3048 m, 1 in = 0.0254 m, 1 lbf = 4.4482216152605 N
 // (NIST SP 811, Appendix B). Round-trips hold to rounding error of doubles.
 TEST_CASE("every quantity round-trips through internal units in both systems", "[core][units]") {
-  const Quantity all[] = {Quantity::length, Quantity::section_length, Quantity::area, Quantity::section_modulus,
-                          Quantity::inertia, Quantity::force, Quantity::moment, Quantity::line_load,
-                          Quantity::stress, Quantity::unit_weight, Quantity::angle, Quantity::weight_tons,
+  const Quantity all[] = {Quantity::length,       Quantity::section_length, Quantity::area,   Quantity::section_modulus,
+                          Quantity::inertia,      Quantity::force,          Quantity::moment, Quantity::line_load,
+                          Quantity::stress,       Quantity::unit_weight,    Quantity::angle,  Quantity::weight_tons,
                           Quantity::dimensionless};
   for (UnitSystem system : {UnitSystem::us, UnitSystem::si}) {
     for (Quantity q : all) {
@@ -26,22 +26,25 @@ TEST_CASE("every quantity round-trips through internal units in both systems", "
 
 TEST_CASE("US and SI user units agree on the same physical value", "[core][units]") {
   // 1 ksi = 6.894757 MPa (NIST SP 811 B.8).
-  TP_CHECK_CLOSE(to_internal(1.0, Quantity::stress, UnitSystem::us) / to_internal(1.0, Quantity::stress, UnitSystem::si),
-                 6.894757293168361, 1e-12, 1.0);
+  TP_CHECK_CLOSE(
+      to_internal(1.0, Quantity::stress, UnitSystem::us) / to_internal(1.0, Quantity::stress, UnitSystem::si),
+      6.894757293168361, 1e-12, 1.0);
   // 1 kip-ft = 1.355818 kN-m (NIST SP 811 B.8, torque).
-  TP_CHECK_CLOSE(to_internal(1.0, Quantity::moment, UnitSystem::us) / to_internal(1.0, Quantity::moment, UnitSystem::si),
-                 1.3558179483314, 1e-12, 1.0);
+  TP_CHECK_CLOSE(
+      to_internal(1.0, Quantity::moment, UnitSystem::us) / to_internal(1.0, Quantity::moment, UnitSystem::si),
+      1.3558179483314, 1e-12, 1.0);
   // 1 kip/ft = 14.593903 kN/m.
-  TP_CHECK_CLOSE(to_internal(1.0, Quantity::line_load, UnitSystem::us) /
-                     to_internal(1.0, Quantity::line_load, UnitSystem::si),
-                 14.593902937206, 1e-12, 1.0);
+  TP_CHECK_CLOSE(
+      to_internal(1.0, Quantity::line_load, UnitSystem::us) / to_internal(1.0, Quantity::line_load, UnitSystem::si),
+      14.593902937206, 1e-12, 1.0);
   // 1 in^4 = 416231.4256 mm^4 (0.0254^4 m^4).
-  TP_CHECK_CLOSE(to_internal(1.0, Quantity::inertia, UnitSystem::us) / to_internal(1.0, Quantity::inertia, UnitSystem::si),
-                 416231.4256, 1e-12, 1.0);
+  TP_CHECK_CLOSE(
+      to_internal(1.0, Quantity::inertia, UnitSystem::us) / to_internal(1.0, Quantity::inertia, UnitSystem::si),
+      416231.4256, 1e-12, 1.0);
   // 1 kcf = 157.087463 kN/m^3.
-  TP_CHECK_CLOSE(to_internal(1.0, Quantity::unit_weight, UnitSystem::us) /
-                     to_internal(1.0, Quantity::unit_weight, UnitSystem::si),
-                 157.08746384, 1e-9, 1.0);
+  TP_CHECK_CLOSE(
+      to_internal(1.0, Quantity::unit_weight, UnitSystem::us) / to_internal(1.0, Quantity::unit_weight, UnitSystem::si),
+      157.08746384, 1e-9, 1.0);
 }
 
 TEST_CASE("unit systems parse from their file spelling only", "[core][units]") {

@@ -16,12 +16,12 @@ inline bool close(double actual, double expected, double rel, double scale = 1.0
 }
 
 // Catch matcher-style wrapper so failures print both numbers.
-#define TP_CHECK_CLOSE(actual, expected, rel, scale)                                 \
-  do {                                                                                \
-    const double tp_a_ = (actual);                                                    \
-    const double tp_e_ = (expected);                                                  \
-    INFO("actual " << tp_a_ << ", expected " << tp_e_ << ", rel tol " << (rel));      \
-    CHECK(::tenthpoint::test::close(tp_a_, tp_e_, (rel), (scale)));                   \
+#define TP_CHECK_CLOSE(actual, expected, rel, scale)                             \
+  do {                                                                           \
+    const double tp_a_ = (actual);                                               \
+    const double tp_e_ = (expected);                                             \
+    INFO("actual " << tp_a_ << ", expected " << tp_e_ << ", rel tol " << (rel)); \
+    CHECK(::tenthpoint::test::close(tp_a_, tp_e_, (rel), (scale)));              \
   } while (0)
 
 }  // namespace tenthpoint::test
