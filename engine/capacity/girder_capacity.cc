@@ -1,0 +1,342 @@
+#include "engine/capacity/girder_capacity.h"
+
+#include <algorithm>
+#include <cassert>
+#include <cmath>
+#include <type_traits>
+
+#include <fmt/format.h>
+
+#include "engine/capacity/concrete_flexure.h"
+#include "engine/capacity/concrete_section_builder.h"
+#include "engine/capacity/given_capacity_lookup.h"
+#include "engine/capacity/stage_moduli.h"
+#include "engine/capacity/steel_composite_positive_flexure.h"
+#include "engine/capacity/steel_flange_flexure.h"
+#include "engine/capacity/steel_shear.h"
+#include "engine/core/errors.h"
+
+namespace tenthpoint::capacity {
+namespace {
+
+using section::detail::kStationTolerance;
+
+const char* side_name(section::Side side) { return side == section::Side::left ? "left" : "right"; }
+
+CapacityOptions checked(const CapacityOptions& options) {
+  std::string why;
+  if (!options.is_valid(&why)) throw InputError(SourceLocation{}, "capacity options", why);
+  return options;
+}
+
+// Heights above the soffit of the web's bottom and top edges.
+struct WebEdges {
+  Real bottom = 0;
+  Real top = 0;
+};
+
+WebEdges web_edges(const model::SteelIGirder& g) {
+  WebEdges e;
+  e.bottom = g.bottom_flange.thickness + (g.bottom_cover_plate ? g.bottom_cover_plate->thickness : 0.0);
+  e.top = e.bottom + g.web.width;
+  return e;
+}
+
+}  // namespace
+
+struct GirderCapacity::State {
+  DeterioratedSection deteriorated;
+  std::string label;
+  std::optional<section::SectionStages> described;  // from the (reduced) description: geometry
+  std::optional<section::SectionStages> analysis;   // stage moduli for stresses
+};
+
+GirderCapacity::GirderCapacity(const model::Bridge& bridge, const model::GirderLine& girder,
+                               const CapacityOptions& options)
+    : source_file_(bridge.source_file),
+      method_(bridge.rating.method),
+      materials_(bridge.materials),
+      sections_(bridge.sections),
+      capacity_(bridge.capacity),
+      girder_(girder),
+      options_(checked(options)),
+      profile_(bridge, girder, options_.section) {
+  const std::optional<CalendarDate> as_of = options_.as_of ? options_.as_of : bridge.rating.as_of;
+  if (const model::Inspection* record = bridge.latest_inspection(as_of)) inspection_ = *record;
+
+  boundaries_.push_back(girder.segments.front().start);
+  for (const model::Segment& segment : girder.segments) {
+    boundaries_.push_back(segment.end);
+    if (segment.prismatic()) {
+      tapered_.push_back(nullptr);
+      continue;
+    }
+    // Haunched segments: the blended description at any station (the
+    // profile has already checked both ends).
+    tapered_.push_back(std::make_shared<const section::TaperedSection>(
+        *bridge.find_section(segment.section), *bridge.find_section(*segment.end_section), *segment.taper,
+        segment.start, segment.end, materials_, options_.section, segment.where));
+  }
+
+  brace_points_ = girder.brace_stations;
+  brace_points_.push_back(0.0);
+  brace_points_.push_back(profile_.length());
+  std::sort(brace_points_.begin(), brace_points_.end());
+  std::vector<Real> unique;
+  for (Real x : brace_points_) {
+    if (x < -kStationTolerance || x > profile_.length() + kStationTolerance) continue;
+    if (unique.empty() || x - unique.back() > kStationTolerance) unique.push_back(x);
+  }
+  brace_points_ = unique;
+}
+
+std::vector<model::SectionLoss> GirderCapacity::losses_here(Real station, section::Side side) const {
+  if (!inspection_) return {};
+  return losses_at(*inspection_, girder_.id, station, side, profile_.length());
+}
+
+DeterioratedSection GirderCapacity::section_at(Real station, section::Side side) const {
+  const std::size_t index = section::detail::locate(boundaries_, station, side);
+  model::SectionDefinition definition;
+  if (tapered_[index]) {
+    definition = tapered_[index]->section_at(station);
+  } else {
+    const std::string& id = girder_.segments[index].section;
+    const auto it = std::find_if(sections_.begin(), sections_.end(),
+                                 [&](const model::SectionDefinition& s) { return s.id == id; });
+    assert(it != sections_.end());  // the profile resolved every segment
+    definition = *it;
+  }
+  return apply_section_loss(definition, losses_here(station, side));
+}
+
+Real GirderCapacity::unbraced_length(Real station, section::Side side) const {
+  const std::size_t panel = section::detail::locate(brace_points_, station, side);
+  return brace_points_[panel + 1] - brace_points_[panel];
+}
+
+GirderCapacity::State GirderCapacity::state_at(Real station, section::Side side) const {
+  State s;
+  s.deteriorated = section_at(station, side);
+  s.label = fmt::format("girder {} at {:.3f} m ({} side), section {}", girder_.id, station, side_name(side),
+                        s.deteriorated.section.id);
+  if (!s.deteriorated.section.description) return s;
+  s.described = section::described_section_stages(s.deteriorated.section, materials_, options_.section);
+  s.analysis = s.deteriorated.reduced() ? s.described : profile_.stages_at(station, side);
+  return s;
+}
+
+void GirderCapacity::finish(Resistance& r, const State& state) const {
+  for (const std::string& note : state.deteriorated.notes) r.trace.add_note(note);
+  r.warnings.insert(r.warnings.end(), state.deteriorated.warnings.begin(), state.deteriorated.warnings.end());
+  if (state.deteriorated.reduced()) {
+    r.warnings.push_back(fmt::format("{}: section reduced for {} loss record(s) of the inspection of {}", state.label,
+                                     state.deteriorated.applied.size(), inspection_->date.to_iso()));
+  }
+  if (r.status == ResistanceStatus::computed && method_ == model::RatingMethod::lfr) {
+    r.warnings.push_back("resistances follow AASHTO LRFD; Load Factor Rating (Standard Specifications) capacities "
+                         "are not implemented");
+  }
+}
+
+Resistance GirderCapacity::steel_flexure(const State& s, MomentSign sign, Real station, section::Side side) const {
+  const auto& girder = std::get<model::SteelIGirder>(*s.deteriorated.section.description);
+  if (!materials_.steel) {
+    throw InputError(SourceLocation{source_file_, 0, 0}, "materials.steel", "missing; needed for steel flexure");
+  }
+  const model::Steel& steel = *materials_.steel;
+  const section::SectionStages& described = *s.described;
+  const section::SectionStages& analysis = *s.analysis;
+  const std::string label = fmt::format("{} {} moment", s.label, to_string(sign));
+
+  if (materials_.composite && sign == MomentSign::positive) {
+    if (!materials_.deck_concrete) {
+      throw InputError(SourceLocation{source_file_, 0, 0}, "materials.deck_concrete",
+                       "missing; needed for composite flexure");
+    }
+    CompositePositiveFlexureInput in;
+    in.label = label;
+    in.girder = girder;
+    in.deck = *s.deteriorated.section.deck;
+    in.steel_yield = steel.yield_strength;
+    in.steel_modulus = steel.modulus;
+    in.deck_strength = materials_.deck_concrete->compressive_strength;
+    in.include_deck_bars = options_.include_deck_bars_in_plastic_moment;
+    if (in.include_deck_bars) {
+      in.deck_bar_yield = materials_.reinforcement ? materials_.reinforcement->yield_strength : steel.yield_strength;
+    }
+    in.stages = described;
+    CompositePositiveFlexure out = composite_positive_flexure(in, options_.resistance);
+    if (out.resistance.flange_stress) out.resistance.flange_stress->moduli = uncracked_stage_moduli(analysis);
+    return out.resistance;
+  }
+
+  SteelFlangeFlexureInput in;
+  in.label = label;
+  in.girder = girder;
+  in.steel_yield = steel.yield_strength;
+  in.steel_modulus = steel.modulus;
+  in.compression_on_top = sign == MomentSign::positive;
+  in.unbraced_length = unbraced_length(station, side);
+  in.moment_gradient_factor = options_.moment_gradient_factor;
+  // The live-load section: steel plus deck bars in negative flexure of a
+  // composite girder (6.10.1.1.1c), else the steel alone.
+  const bool cracked = materials_.composite && described.cracked_negative.has_value();
+  const section::StageProperties& live = cracked ? *described.cracked_negative : described.noncomposite;
+  assert(live.neutral_axis);
+  const WebEdges web = web_edges(girder);
+  in.web_compression_depth = std::clamp(in.compression_on_top ? web.top - *live.neutral_axis
+                                                              : *live.neutral_axis - web.bottom,
+                                        0.0, girder.web.width);
+  in.compression_modulus = in.compression_on_top ? live.section_modulus_top : live.section_modulus_bottom;
+  in.tension_modulus = in.compression_on_top ? live.section_modulus_bottom : live.section_modulus_top;
+  in.moduli = materials_.composite ? cracked_stage_moduli(analysis) : uncracked_stage_moduli(analysis);
+  Resistance r = steel_flange_flexure(in, options_.resistance).resistance;
+  r.trace.add_note(cracked ? "Dc and the moment equivalent on the steel plus deck bars (AASHTO LRFD D6.3.1, 6.10.1.1.1c)"
+                           : "Dc and the moment equivalent on the steel section");
+  return r;
+}
+
+Resistance GirderCapacity::flexure(Real station, MomentSign sign, section::Side side) const {
+  if (capacity_.mode == model::CapacitySource::given) {
+    return given_resistance(capacity_.given, girder_.id, station, side, model::ForceEffect::moment, sign,
+                            losses_here(station, side));
+  }
+  const State s = state_at(station, side);
+  if (!s.deteriorated.section.description) {
+    Resistance r = Resistance::unavailable_because(fmt::format(
+        "{}: the section has no description (steel_i, rc_beam or ps_girder), so its capacity cannot be computed; "
+        "give capacity.given for this region",
+        s.label));
+    finish(r, s);
+    return r;
+  }
+  Resistance r = std::visit(
+      [&](const auto& d) -> Resistance {
+        using T = std::decay_t<decltype(d)>;
+        if constexpr (std::is_same_v<T, model::SteelIGirder>) {
+          return steel_flexure(s, sign, station, side);
+        } else {
+          const ConcreteMemberSections member =
+              std::is_same_v<T, model::ReinforcedConcreteBeam>
+                  ? reinforced_concrete_sections(s.deteriorated.section, materials_, sign, options_.density_factor,
+                                                 source_file_)
+                  : prestressed_sections(s.deteriorated.section, materials_, sign, options_.density_factor,
+                                         source_file_);
+          ConcreteFlexure f = concrete_flexure(member.flexure, options_.resistance);
+          for (const std::string& note : member.notes) f.resistance.trace.add_note(note);
+          f.resistance.warnings.insert(f.resistance.warnings.end(), member.warnings.begin(), member.warnings.end());
+          return f.resistance;
+        }
+      },
+      *s.deteriorated.section.description);
+  finish(r, s);
+  return r;
+}
+
+Resistance GirderCapacity::shear(Real station, section::Side side, const std::optional<ShearDemand>& demand,
+                                 MomentSign sign) const {
+  if (capacity_.mode == model::CapacitySource::given) {
+    return given_resistance(capacity_.given, girder_.id, station, side, model::ForceEffect::shear,
+                            MomentSign::positive, losses_here(station, side));
+  }
+  const State s = state_at(station, side);
+  if (!s.deteriorated.section.description) {
+    Resistance r = Resistance::unavailable_because(fmt::format(
+        "{}: the section has no description, so its shear capacity cannot be computed; give capacity.given", s.label));
+    finish(r, s);
+    return r;
+  }
+  if (demand) sign = demand->moment < 0 ? MomentSign::negative : MomentSign::positive;
+  Resistance r = std::visit(
+      [&](const auto& d) -> Resistance {
+        using T = std::decay_t<decltype(d)>;
+        if constexpr (std::is_same_v<T, model::SteelIGirder>) {
+          if (!materials_.steel) {
+            throw InputError(SourceLocation{source_file_, 0, 0}, "materials.steel", "missing; needed for steel shear");
+          }
+          SteelShearInput in;
+          in.label = s.label;
+          in.web_depth = d.web.width;
+          in.web_thickness = d.web.thickness;
+          in.web_yield = materials_.steel->yield_strength;
+          in.modulus = materials_.steel->modulus;
+          in.stiffener_spacing = d.transverse_stiffener_spacing;
+          if (in.stiffener_spacing) {
+            const Real spacing = *in.stiffener_spacing;
+            in.end_panel = station <= spacing + kStationTolerance ||
+                           station >= profile_.length() - spacing - kStationTolerance;
+          }
+          in.compression_flange_area = d.top_flange.width * d.top_flange.thickness;
+          in.tension_flange_area = d.bottom_flange.width * d.bottom_flange.thickness;
+          Resistance out = steel_shear(in, options_.resistance);
+          if (in.end_panel) out.trace.add_note("end panel: within one stiffener spacing of a girder end");
+          return out;
+        } else {
+          const ConcreteMemberSections member =
+              std::is_same_v<T, model::ReinforcedConcreteBeam>
+                  ? reinforced_concrete_sections(s.deteriorated.section, materials_, sign, options_.density_factor,
+                                                 source_file_)
+                  : prestressed_sections(s.deteriorated.section, materials_, sign, options_.density_factor,
+                                         source_file_);
+          const ConcreteFlexure f = concrete_flexure(member.flexure, options_.resistance);
+          if (!f.resistance.available()) {
+            return Resistance::unavailable_because(
+                fmt::format("{}: dv (AASHTO LRFD 5.7.2.8) needs the flexural calculation, which failed: {}", s.label,
+                            f.resistance.reason));
+          }
+          Resistance out = concrete_shear(member.shear, f.shear_depth, demand, options_.shear_method,
+                                          options_.aggregate_size, options_.resistance);
+          out.trace.add_note(fmt::format("dv from the {} moment flexural calculation", to_string(sign)));
+          return out;
+        }
+      },
+      *s.deteriorated.section.description);
+  finish(r, s);
+  return r;
+}
+
+SteelServiceLimits GirderCapacity::steel_service(Real station, section::Side side) const {
+  SteelServiceLimits out;
+  if (!model::is_steel(materials_.kind)) {
+    out.status = ResistanceStatus::unavailable;
+    out.reason = fmt::format("girder {}: Service II flange limits apply to steel girders only", girder_.id);
+    return out;
+  }
+  const State s = state_at(station, side);
+  if (!s.analysis) {
+    out.status = ResistanceStatus::unavailable;
+    out.reason = fmt::format("{}: no section description to take the stage moduli from", s.label);
+    return out;
+  }
+  if (!materials_.steel) {
+    throw InputError(SourceLocation{source_file_, 0, 0}, "materials.steel", "missing; needed for Service II");
+  }
+  out = steel_service_limits(materials_.steel->yield_strength, *s.analysis, options_.service_ii_uncracked_negative);
+  out.warnings = s.deteriorated.warnings;
+  for (const std::string& note : s.deteriorated.notes) out.trace.add_note(note);
+  return out;
+}
+
+PrestressedServiceLimits GirderCapacity::prestressed_service(Real station, section::Side side) const {
+  PrestressedServiceLimits out;
+  if (materials_.kind != model::MaterialKind::prestressed_concrete) {
+    out.status = ResistanceStatus::unavailable;
+    out.reason = fmt::format("girder {}: Service III tension applies to prestressed girders only", girder_.id);
+    return out;
+  }
+  const State s = state_at(station, side);
+  if (!s.analysis) {
+    out.status = ResistanceStatus::unavailable;
+    out.reason = fmt::format("{}: no section description to take the strands from", s.label);
+    return out;
+  }
+  const auto& girder = std::get<model::PrestressedGirder>(*s.deteriorated.section.description);
+  out = prestressed_service_limits(s.label, girder, materials_, *s.analysis, options_.prestressed_service,
+                                   options_.section, options_.density_factor);
+  out.warnings.insert(out.warnings.end(), s.deteriorated.warnings.begin(), s.deteriorated.warnings.end());
+  for (const std::string& note : s.deteriorated.notes) out.trace.add_note(note);
+  return out;
+}
+
+}  // namespace tenthpoint::capacity
