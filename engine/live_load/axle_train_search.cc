@@ -11,9 +11,9 @@ namespace tenthpoint::live_load {
 namespace {
 
 constexpr Real kInfinity = std::numeric_limits<Real>::infinity();
-// Same meaning as in TrainSweep: values are exact to this fraction of
-// sum(w) * max|eta|.
-constexpr Real kPruneTolerance = 1e-12;
+// Values closer than this fraction of sum(w) * max|eta| are equal: the
+// rounding of the incremental sweep is about 1e-13 of that scale.
+constexpr Real kPruneTolerance = 1e-11;
 
 enum class LinkChoice { at_min, at_max, free };
 
@@ -27,6 +27,14 @@ AxleTrainSearch::AxleTrainSearch(AxleChain chain, const std::vector<Real>& knots
   build_patterns(knots, TravelDirection::rightward);
   if (options.both_directions && !chain_.symmetric()) build_patterns(knots, TravelDirection::leftward);
   std::stable_partition(patterns_.begin(), patterns_.end(), [](const Pattern& p) { return p.clusters.size() == 1; });
+  std::vector<bool> rigid(sweeps_.size(), false);
+  std::vector<bool> clustered(sweeps_.size(), false);
+  for (const Pattern& p : patterns_) {
+    for (const Cluster& c : p.clusters) (p.clusters.size() == 1 ? rigid : clustered)[c.sweep] = true;
+  }
+  for (std::size_t s = 0; s < sweeps_.size(); ++s) {
+    if (clustered[s] && !rigid[s]) cluster_sweeps_.push_back(s);
+  }
 }
 
 void AxleTrainSearch::build_patterns(const std::vector<Real>& knots, TravelDirection direction) {
@@ -108,36 +116,70 @@ ExtremePair<TrainExtreme> AxleTrainSearch::search(const EffectCurve& curve, Axle
   struct Best {
     Real value = 0.0;  // sign(extreme) * effect, >= 0
     const Pattern* pattern = nullptr;
-    std::vector<SweepCandidate> chosen;
+    std::array<SweepCandidate, kMaxVariableLinks + 1> chosen{};  // one per cluster
   };
   ExtremePair<Best> best;
-  scratch.memo.assign(sweeps_.size(), std::nullopt);
+  scratch.memo.resize(sweeps_.size());
+  scratch.kept.resize(sweeps_.size());
   Real weight_sum = 0.0;
   for (Real w : chain_.weights) weight_sum += std::abs(w);
   const Real margin = kPruneTolerance * weight_sum * curve.scale();
-
-  auto own = [&](std::size_t sweep) -> const SweepExtremes& {
-    if (!scratch.memo[sweep]) scratch.memo[sweep] = sweeps_[sweep]->extremes(curve, rule, scratch.sweep);
-    return *scratch.memo[sweep];
+  auto own = [&](std::size_t sweep, Extreme x) {
+    const SweepExtremes& e = scratch.memo[sweep];
+    return sign_of(x) * (x == Extreme::maximum ? e.maximum.value : e.minimum.value);
   };
 
+  // 1. Rigid patterns: every variable link at a bound, one sweep each; each
+  // only has to beat the best of those before it.
   for (const Pattern& pattern : patterns_) {
-    const std::size_t m = pattern.clusters.size();
-    if (m == 1) {
-      const SweepExtremes& e = own(pattern.clusters[0].sweep);
-      for (Extreme x : kExtremes) {
-        if (!wanted[x]) continue;
-        const SweepCandidate& c = x == Extreme::maximum ? e.maximum : e.minimum;
-        const Real v = sign_of(x) * c.value;
-        if (v > best[x].value) {
-          best[x].value = v;
-          best[x].pattern = &pattern;
-          best[x].chosen.assign(1, c);
+    if (pattern.clusters.size() != 1) break;
+    const std::size_t s = pattern.clusters[0].sweep;
+    const ExtremePair<Real> known{best.maximum.value, -best.minimum.value};
+    scratch.memo[s] = sweeps_[s]->extremes(curve, rule, scratch.sweep, known);
+    for (Extreme x : kExtremes) {
+      if (!wanted[x]) continue;
+      const SweepCandidate& c = x == Extreme::maximum ? scratch.memo[s].maximum : scratch.memo[s].minimum;
+      const Real v = sign_of(x) * c.value;
+      if (v > best[x].value) {
+        best[x].value = v;
+        best[x].pattern = &pattern;
+        best[x].chosen[0] = c;
+      }
+    }
+  }
+
+  // 2. Clusters of the other patterns: one sweep each, keeping the
+  // candidates that could matter. A cluster adds at most its weight times
+  // the curve's peak ordinate of that sign.
+  auto peak_bound = [&](std::size_t sweep, Extreme x) {
+    return sweeps_[sweep]->weight_sum() * sign_of(x) * curve.peak(x).value;
+  };
+  for (std::size_t s : cluster_sweeps_) {
+    SweepKeep keep;
+    for (Extreme x : kExtremes) {
+      if (!wanted[x]) continue;
+      Real floor = std::numeric_limits<Real>::infinity();
+      for (const Pattern& pattern : patterns_) {
+        if (pattern.clusters.size() == 1) continue;
+        Real others = 0.0;
+        for (const Cluster& c : pattern.clusters) others += peak_bound(c.sweep, x);
+        for (const Cluster& c : pattern.clusters) {
+          if (c.sweep == s) floor = std::min(floor, best[x].value - (others - peak_bound(s, x)));
         }
       }
-      continue;
+      const std::size_t e = x == Extreme::maximum ? 0 : 1;
+      scratch.kept[s][e].clear();
+      keep.list[e] = &scratch.kept[s][e];
+      keep.floor[e] = floor;
     }
+    scratch.memo[s] = sweeps_[s]->candidates(curve, rule, keep, scratch.sweep);
+  }
 
+  // 3. The patterns with free links: cut each cluster's kept candidates to
+  // those that can still help, then pair them up.
+  for (const Pattern& pattern : patterns_) {
+    const std::size_t m = pattern.clusters.size();
+    if (m == 1) continue;
     if (scratch.candidates.size() < m) {
       scratch.candidates.resize(m);
       scratch.values.resize(m);
@@ -147,20 +189,19 @@ ExtremePair<TrainExtreme> AxleTrainSearch::search(const EffectCurve& curve, Axle
       if (!wanted[x]) continue;
       const Real sign = sign_of(x);
       Real sum_own = 0.0;
-      for (const Cluster& c : pattern.clusters) {
-        const SweepExtremes& e = own(c.sweep);
-        sum_own += sign * (x == Extreme::maximum ? e.maximum.value : e.minimum.value);
-      }
+      for (const Cluster& c : pattern.clusters) sum_own += own(c.sweep, x);
       // Even every cluster at its own best cannot beat what is known.
       if (sum_own <= best[x].value + margin) continue;
       bool feasible = true;
       for (std::size_t c = 0; c < m && feasible; ++c) {
-        const SweepExtremes& e = own(pattern.clusters[c].sweep);
-        const Real mine = sign * (x == Extreme::maximum ? e.maximum.value : e.minimum.value);
-        const Real needed = best[x].value - (sum_own - mine);
-        sweeps_[pattern.clusters[c].sweep]->candidates(curve, rule, x, sign * needed, scratch.candidates[c],
-                                                       scratch.sweep);
-        feasible = !scratch.candidates[c].empty();
+        const std::size_t s = pattern.clusters[c].sweep;
+        const Real needed = best[x].value - (sum_own - own(s, x)) - margin;
+        auto& list = scratch.candidates[c];
+        list.clear();
+        for (const SweepCandidate& k : scratch.kept[s][x == Extreme::maximum ? 0 : 1]) {
+          if (sign * k.value >= needed) list.push_back(k);
+        }
+        feasible = !list.empty();
       }
       if (!feasible) continue;
 
@@ -211,7 +252,6 @@ ExtremePair<TrainExtreme> AxleTrainSearch::search(const EffectCurve& curve, Axle
       if (first_values[top] == kNone || first_values[top] <= best[x].value) continue;
       best[x].value = first_values[top];
       best[x].pattern = &pattern;
-      best[x].chosen.resize(m);
       std::size_t i = top;
       for (std::size_t c = 0; c < m; ++c) {
         best[x].chosen[c] = scratch.candidates[c][i];
@@ -222,19 +262,23 @@ ExtremePair<TrainExtreme> AxleTrainSearch::search(const EffectCurve& curve, Axle
 
   ExtremePair<TrainExtreme> out;
   for (Extreme x : kExtremes) {
-    if (best[x].pattern && best[x].value > 0.0) out[x] = to_extreme(*best[x].pattern, best[x].chosen, curve, rule, x);
+    // Values at the rounding level of the sweep are zero: nothing adverse.
+    if (wanted[x] && best[x].pattern && best[x].value > margin) {
+      out[x] = to_extreme(*best[x].pattern, best[x].chosen.data(), curve, rule, x);
+    }
   }
   return out;
 }
 
-TrainExtreme AxleTrainSearch::to_extreme(const Pattern& pattern, const std::vector<SweepCandidate>& chosen,
-                                         const EffectCurve& curve, AxleRule rule, Extreme extreme) const {
+TrainExtreme AxleTrainSearch::to_extreme(const Pattern& pattern, const SweepCandidate* chosen, const EffectCurve& curve,
+                                         AxleRule rule, Extreme extreme) const {
   TrainExtreme out;
   TrainPlacement placement;
   placement.direction = pattern.direction;
   placement.lead_station = chosen[0].lead;
   const Real sign = sign_of(extreme);
   const Real tiny = 1e-12 * curve.scale();
+  Real exact = 0.0;
   std::size_t variable = 0;
   for (std::size_t c = 0; c < pattern.clusters.size(); ++c) {
     const Cluster& cluster = pattern.clusters[c];
@@ -244,13 +288,21 @@ TrainExtreme AxleTrainSearch::to_extreme(const Pattern& pattern, const std::vect
     const std::vector<Real>& offsets = sweep.group().offsets;
     for (std::size_t a = 0; a < offsets.size(); ++a) {
       const std::size_t axle = cluster.first_axle + a;
-      if (rule == AxleRule::drop_relieving && sign * sweep.axle_ordinate(curve, at, a) < -tiny) {
-        placement.dropped |= std::uint64_t{1} << axle;
-      }
+      const Real x = at.lead + offsets[a];
       // The one-sided approach matters only for an axle standing at a jump.
       if (at.approach != Approach::exact) {
         for (Real d : curve.discontinuities()) {
-          if (std::abs(at.lead + offsets[a] - d) <= kStationTolerance) placement.approach = at.approach;
+          if (std::abs(x - d) <= kStationTolerance) placement.approach = at.approach;
+        }
+      }
+      if (rule == AxleRule::drop_relieving) {
+        // Evaluated afresh from the exact ordinates: which axles relieve, and
+        // the value without the sweep's rounding.
+        const Real eta = curve.ordinate(x, at.approach);
+        if (sign * eta < -tiny) {
+          placement.dropped |= std::uint64_t{1} << axle;
+        } else {
+          exact += chain_.weights[axle] * eta;
         }
       }
       if (axle == cluster.last_axle) break;
@@ -263,6 +315,7 @@ TrainExtreme AxleTrainSearch::to_extreme(const Pattern& pattern, const std::vect
           pattern.direction == TravelDirection::rightward ? at.lead + o - next : next - at.lead - o;
     }
   }
+  if (rule == AxleRule::drop_relieving) out.value = exact;
   out.placement = placement;
   return out;
 }

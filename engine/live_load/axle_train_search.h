@@ -20,14 +20,20 @@
 // equivalent to one of those or to a link at a bound, which another
 // assignment covers.
 //
-// Pruning keeps it fast: each cluster's own best value is found first (a
-// pruned sweep), and a cluster only needs candidates that could still lift
-// the total above the best value found so far given the others' bests.
+// Order of work, which keeps it fast: the rigid patterns (every link at a
+// bound) come first and give a best value; then each cluster of the other
+// patterns is swept once, keeping its own best and only the candidates that
+// could still lift a total above that best value given what the other
+// clusters can contribute at most (their weight times the peak ordinate);
+// the programme then uses the clusters' bests to cut the lists further.
 //
-// Values are exact to a relative 1e-12 of sum(w) x max|ordinate| (the pruning
-// tolerance of TrainSweep); units as TrainSweep.
+// Values are those of the exact polynomials, to rounding of about 1e-13 of
+// sum(w) x max|ordinate|; with relieving axles dropped they are evaluated
+// afresh from the exact ordinates at the placement found. Units as
+// TrainSweep.
 #pragma once
 
+#include <array>
 #include <cstddef>
 #include <memory>
 #include <optional>
@@ -60,7 +66,10 @@ struct TrainExtreme {
 // Scratch space for searches; reuse one per thread across calls.
 struct TrainSearchScratch {
   SweepScratch sweep;
-  std::vector<std::optional<SweepExtremes>> memo;
+  // Per sweep: both extremes of the cluster alone, and the candidates kept
+  // for each extreme.
+  std::vector<SweepExtremes> memo;
+  std::vector<std::array<std::vector<SweepCandidate>, 2>> kept;
   std::vector<std::vector<SweepCandidate>> candidates;
   std::vector<std::vector<Real>> values;
   std::vector<std::vector<std::size_t>> choice;
@@ -99,12 +108,13 @@ class AxleTrainSearch {
   };
 
   void build_patterns(const std::vector<Real>& knots, TravelDirection direction);
-  [[nodiscard]] TrainExtreme to_extreme(const Pattern& pattern, const std::vector<SweepCandidate>& chosen,
-                                        const EffectCurve& curve, AxleRule rule, Extreme extreme) const;
+  [[nodiscard]] TrainExtreme to_extreme(const Pattern& pattern, const SweepCandidate* chosen, const EffectCurve& curve,
+                                        AxleRule rule, Extreme extreme) const;
 
   AxleChain chain_;
   std::vector<std::unique_ptr<TrainSweep>> sweeps_;
-  std::vector<Pattern> patterns_;  // single-cluster patterns first
+  std::vector<Pattern> patterns_;            // single-cluster patterns first
+  std::vector<std::size_t> cluster_sweeps_;  // sweeps of clusters of the other patterns
 };
 
 }  // namespace tenthpoint::live_load

@@ -94,6 +94,22 @@ EffectCurve::EffectCurve(analysis::PiecewiseCubic curve, analysis::ShearSide sid
     change_begin_[i + 1] = static_cast<std::uint32_t>(changes_.size());
   }
 
+  // Sparse tables for range extremes over runs of pieces.
+  level_.assign(pieces + 1, 0);
+  for (std::size_t c = 2; c <= pieces; ++c) level_[c] = static_cast<std::uint8_t>(level_[c / 2] + 1);
+  const std::size_t levels = static_cast<std::size_t>(level_[pieces]) + 1;
+  table_max_.assign(levels * pieces, 0.0);
+  table_min_.assign(levels * pieces, 0.0);
+  std::copy(piece_max_.begin(), piece_max_.end(), table_max_.begin());
+  std::copy(piece_min_.begin(), piece_min_.end(), table_min_.begin());
+  for (std::size_t l = 1; l < levels; ++l) {
+    const std::size_t half = std::size_t{1} << (l - 1);
+    for (std::size_t i = 0; i + (std::size_t{1} << l) <= pieces; ++i) {
+      table_max_[l * pieces + i] = std::max(table_max_[(l - 1) * pieces + i], table_max_[(l - 1) * pieces + i + half]);
+      table_min_[l * pieces + i] = std::min(table_min_[(l - 1) * pieces + i], table_min_[(l - 1) * pieces + i + half]);
+    }
+  }
+
   // Areas and loaded regions: between consecutive sign changes the sign is
   // constant, decided at the midpoint; pieces that vanish identically load
   // nothing.
@@ -124,6 +140,66 @@ EffectCurve::EffectCurve(analysis::PiecewiseCubic curve, analysis::ShearSide sid
     const Real left = i == 0 ? 0.0 : detail::horner(curve_.coefficients()[i - 1], lengths_[i - 1]);
     const Real right = i == pieces ? 0.0 : curve_.coefficients()[i][0];
     if (std::abs(right - left) > jump) discontinuities_.push_back(k[i]);
+  }
+  auto exact_if_continuous = [this](OrdinatePeak& p) {
+    if (std::find(discontinuities_.begin(), discontinuities_.end(), p.station) == discontinuities_.end()) {
+      p.approach = Approach::exact;
+    }
+  };
+  exact_if_continuous(max_);
+  exact_if_continuous(min_);
+  for (OrdinatePeak& p : span_max_) exact_if_continuous(p);
+  for (OrdinatePeak& p : span_min_) exact_if_continuous(p);
+
+  // Jumps for the moving-load sweep. The sign of a piece next to one of its
+  // ends, or next to one of its sign changes, is the sign at the midpoint of
+  // the part between them.
+  auto sign_between = [this, zero](std::size_t i, Real a, Real b) {
+    const Real v = detail::horner(curve_.coefficients()[i], 0.5 * (a + b));
+    return std::abs(v) <= zero ? 0 : (v > 0.0 ? 1 : -1);
+  };
+  auto first_cut = [this](std::size_t i) { return sign_change_count(i) ? sign_changes(i)[0] : lengths_[i]; };
+  auto last_cut = [this](std::size_t i) {
+    return sign_change_count(i) ? sign_changes(i)[sign_change_count(i) - 1] : 0.0;
+  };
+  jumps_.resize(k.size());
+  positive_jumps_.resize(k.size());
+  negative_jumps_.resize(k.size());
+  for (std::size_t i = 0; i < k.size(); ++i) {
+    detail::Cubic right{};
+    detail::Cubic left{};
+    int right_sign = 0;
+    int left_sign = 0;
+    if (i < pieces) {
+      right = curve_.coefficients()[i];
+      right_sign = sign_between(i, 0.0, first_cut(i));
+    }
+    if (i > 0) {
+      left = detail::taylor_shift(curve_.coefficients()[i - 1], lengths_[i - 1]);
+      left_sign = sign_between(i - 1, last_cut(i - 1), lengths_[i - 1]);
+    }
+    for (std::size_t m = 0; m < 4; ++m) {
+      jumps_[i][m] = right[m] - left[m];
+      positive_jumps_[i][m] = (right_sign > 0 ? right[m] : 0.0) - (left_sign > 0 ? left[m] : 0.0);
+      negative_jumps_[i][m] = (right_sign < 0 ? right[m] : 0.0) - (left_sign < 0 ? left[m] : 0.0);
+    }
+  }
+  for (std::size_t i = 0; i < pieces; ++i) {
+    const std::size_t n = sign_change_count(i);
+    for (std::size_t r = 0; r < n; ++r) {
+      const Real t = sign_changes(i)[r];
+      const Real before = r == 0 ? 0.0 : sign_changes(i)[r - 1];
+      const Real after = r + 1 == n ? lengths_[i] : sign_changes(i)[r + 1];
+      detail::Cubic e = detail::taylor_shift(curve_.coefficients()[i], t);
+      e[0] = 0.0;  // the value at a sign change is zero; only the slope switches
+      const bool rising = sign_between(i, t, after) > 0 || sign_between(i, before, t) < 0;
+      detail::Cubic on = e;
+      detail::Cubic off = e;
+      for (Real& c : off) c = -c;
+      root_stations_.push_back(k[i] + t);
+      root_positive_jumps_.push_back(rising ? on : off);
+      root_negative_jumps_.push_back(rising ? off : on);
+    }
   }
 }
 

@@ -15,6 +15,7 @@
 // one side of the section), recorded with its Approach.
 #pragma once
 
+#include <algorithm>
 #include <cstddef>
 #include <cstdint>
 #include <string_view>
@@ -69,11 +70,41 @@ class EffectCurve {
   // one-sided limits at its ends included).
   [[nodiscard]] Real piece_max(std::size_t piece) const { return piece_max_[piece]; }
   [[nodiscard]] Real piece_min(std::size_t piece) const { return piece_min_[piece]; }
+  // The same over the pieces first..last (inclusive), in O(1) (a sparse
+  // table of the piece ranges).
+  [[nodiscard]] Real range_max(std::size_t first, std::size_t last) const {
+    const std::size_t level = level_[last - first + 1];
+    const std::size_t n = piece_max_.size();
+    return std::max(table_max_[level * n + first], table_max_[level * n + last + 1 - (std::size_t{1} << level)]);
+  }
+  [[nodiscard]] Real range_min(std::size_t first, std::size_t last) const {
+    const std::size_t level = level_[last - first + 1];
+    const std::size_t n = piece_min_.size();
+    return std::min(table_min_[level * n + first], table_min_[level * n + last + 1 - (std::size_t{1} << level)]);
+  }
   // Sign changes strictly inside a piece, as local coordinates t from the
   // piece start (m), ascending.
   [[nodiscard]] const Real* sign_changes(std::size_t piece) const { return &changes_[change_begin_[piece]]; }
   [[nodiscard]] std::size_t sign_change_count(std::size_t piece) const {
     return change_begin_[piece + 1] - change_begin_[piece];
+  }
+
+  // Jump of the curve at knot k as a cubic in t = x - knot_k: the right
+  // piece minus the left piece expanded about the knot (zero outside the
+  // girder). A moving axle crossing the knot adds its weight times this to
+  // the moving-load polynomial.
+  [[nodiscard]] const detail::Cubic& jump(std::size_t knot) const { return jumps_[knot]; }
+  // The same for the clipped curve max(f, 0) (maximum) or min(f, 0)
+  // (minimum), which the relieving-axle rule uses.
+  [[nodiscard]] const detail::Cubic& clipped_jump(std::size_t knot, Extreme e) const {
+    return e == Extreme::maximum ? positive_jumps_[knot] : negative_jumps_[knot];
+  }
+  // Sign changes of the curve inside pieces, ascending (m), and the jump of
+  // the clipped curves there (a kink: zero value, the piece's slope and
+  // curvature switched on or off).
+  [[nodiscard]] const std::vector<Real>& sign_change_stations() const { return root_stations_; }
+  [[nodiscard]] const detail::Cubic& sign_change_jump(std::size_t root, Extreme e) const {
+    return e == Extreme::maximum ? root_positive_jumps_[root] : root_negative_jumps_[root];
   }
 
   // Ordinate for a unit load at x approached as stated; zero off the girder.
@@ -110,6 +141,9 @@ class EffectCurve {
   std::vector<Real> lengths_;
   std::vector<Real> piece_max_;
   std::vector<Real> piece_min_;
+  std::vector<Real> table_max_;  // level-major: level l holds the extremes of 2^l pieces from each start
+  std::vector<Real> table_min_;
+  std::vector<std::uint8_t> level_;  // floor(log2(count)) for count = 0..pieces
   std::vector<std::uint32_t> change_begin_;
   std::vector<Real> changes_;
   Real positive_area_ = 0;
@@ -122,6 +156,12 @@ class EffectCurve {
   std::vector<OrdinatePeak> span_min_;
   Real scale_ = 0;
   std::vector<Real> discontinuities_;
+  std::vector<detail::Cubic> jumps_;
+  std::vector<detail::Cubic> positive_jumps_;
+  std::vector<detail::Cubic> negative_jumps_;
+  std::vector<Real> root_stations_;
+  std::vector<detail::Cubic> root_positive_jumps_;
+  std::vector<detail::Cubic> root_negative_jumps_;
 };
 
 }  // namespace tenthpoint::live_load

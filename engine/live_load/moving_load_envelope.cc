@@ -62,6 +62,11 @@ std::vector<MovingLoadEnvelope> compute_moving_load_envelopes(const PreparedInfl
   std::string why;
   if (!options.is_valid(&why)) throw std::invalid_argument("envelope options: " + why);
   std::map<ChainKey, std::unique_ptr<AxleTrainSearch>> searches;
+  // Train extremes per (search, rule), per distinct curve, with the extremes
+  // they were computed for.
+  std::map<std::pair<const AxleTrainSearch*, AxleRule>,
+           std::vector<std::optional<std::pair<ExtremePair<TrainExtreme>, ExtremePair<bool>>>>>
+      results;
   TrainSearchScratch scratch;
   std::vector<MovingLoadEnvelope> out;
   out.reserve(models.size());
@@ -103,30 +108,66 @@ std::vector<MovingLoadEnvelope> compute_moving_load_envelopes(const PreparedInfl
       }
 
       result.values = EffectTable<std::optional<CaseExtreme>>(lines.point_count(), lines.support_count());
+      // The effects this case applies to, and which extremes; shear just left
+      // of a point that shares its curve with shear just right is copied.
+      struct Job {
+        EffectKind kind;
+        std::size_t index;
+        ExtremePair<bool> wanted;
+      };
+      std::vector<Job> jobs;
+      std::vector<std::pair<std::size_t, std::size_t>> copies;  // shear_left index <- shear_right index
       for (EffectKind kind : kOrder) {
         const std::size_t count = kind == EffectKind::reaction ? lines.support_count() : lines.point_count();
         for (std::size_t index = 0; index < count; ++index) {
-          auto& slot = result.values.of(kind)[index];
           if (kind == EffectKind::shear_left &&
               lines.curve_index(EffectKind::shear_left, index) == lines.curve_index(EffectKind::shear_right, index)) {
-            slot = result.values.shear_right[index];
+            copies.emplace_back(index, index);
             continue;
           }
           ExtremePair<bool> wanted;
           for (Extreme x : kExtremes) wanted[x] = case_applies(load_case, lines, EffectKey{kind, index, x});
-          if (!wanted.maximum && !wanted.minimum) continue;
-          const EffectCurve& curve = lines.curve(kind, index);
-          ExtremePair<TrainExtreme> train;
-          if (search) train = search->search(curve, result.axle_rule, scratch, wanted);
-          for (Extreme x : kExtremes) {
-            if (!wanted[x]) continue;
-            CaseExtreme value;
-            if (search) value.train = std::move(train[x]);
-            if (load_case.lane) value.lane = lane_extreme(curve, kind, x, *load_case.lane, load_case.lane_concentrated);
-            slot[x] = std::move(value);
-          }
+          if (wanted.maximum || wanted.minimum) jobs.push_back({kind, index, wanted});
         }
       }
+      // Trains: reused when another model moves the same chain by the same
+      // rule (the HL-93 and HS20 trucks).
+      std::vector<ExtremePair<TrainExtreme>> trains(jobs.size());
+      if (search) {
+        auto& cache = results[{search, result.axle_rule}];
+        cache.resize(lines.distinct_curve_count());
+        std::vector<std::size_t> pending;
+        for (std::size_t j = 0; j < jobs.size(); ++j) {
+          const auto& hit = cache[lines.curve_index(jobs[j].kind, jobs[j].index)];
+          const bool covered = hit && (!jobs[j].wanted.maximum || hit->second.maximum) &&
+                               (!jobs[j].wanted.minimum || hit->second.minimum);
+          if (covered) {
+            trains[j] = hit->first;
+          } else {
+            pending.push_back(j);
+          }
+        }
+        for (std::size_t j : pending) {
+          const Job& job = jobs[j];
+          trains[j] = search->search(lines.curve(job.kind, job.index), result.axle_rule, scratch, job.wanted);
+          cache[lines.curve_index(job.kind, job.index)] = std::make_pair(trains[j], job.wanted);
+        }
+      }
+      for (std::size_t j = 0; j < jobs.size(); ++j) {
+        const Job& job = jobs[j];
+        const EffectCurve& curve = lines.curve(job.kind, job.index);
+        auto& slot = result.values.of(job.kind)[job.index];
+        for (Extreme x : kExtremes) {
+          if (!job.wanted[x]) continue;
+          CaseExtreme value;
+          if (search) value.train = trains[j][x];
+          if (load_case.lane) {
+            value.lane = lane_extreme(curve, job.kind, x, *load_case.lane, load_case.lane_concentrated);
+          }
+          slot[x] = std::move(value);
+        }
+      }
+      for (const auto& [left, right] : copies) result.values.shear_left[left] = result.values.shear_right[right];
       envelope.cases.push_back(std::move(result));
     }
 

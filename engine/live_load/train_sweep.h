@@ -6,22 +6,33 @@
 // is a piecewise cubic in x whose breakpoints are the positions where some
 // axle reaches a knot of eta (x = knot_k - offset_i). The sweep builds that
 // breakpoint list once per group and knot vector (it is the same for every
-// influence line of a girder line, which all share the mesh knots), then,
-// per curve, evaluates F exactly where an extreme can be: both one-sided
-// limits at every breakpoint (the sup next to a jump of a shear line is such
-// a limit) and the zeros of F' inside every interval. Nothing is sampled.
+// influence line of a girder line, which all share the mesh knots).
+// Candidates for an extreme are both one-sided values of F at every
+// breakpoint (the sup next to a jump of a shear line is such a limit) and
+// the zeros of F' inside every interval. Nothing is sampled.
 //
-// Pruning, which keeps this fast without giving up exactness: on an interval
-// every axle stays on one piece, so sum_i w_i * (largest value of its piece)
-// bounds F there from above (and the smallest values from below). The bound
-// is updated in O(1) per breakpoint; only intervals whose bound can beat the
-// best value found so far are evaluated.
+// Evaluation. Along a run of breakpoints F is carried as one cubic about the
+// current breakpoint: moving to the next is a Taylor shift, and an axle
+// crossing knot k adds w_i times the curve's jump there (EffectCurve::jump),
+// so each interval costs O(1) whatever the number of axles. The values are
+// those of the exact polynomial, to rounding of about 1e-13 of
+// sum(w) x max|eta|.
+//
+// Pruning. The breakpoints are cut into blocks of kBlockBreaks. Over a block
+// each axle stays on a known, short run of pieces, so
+//   sum_i w_i * (largest value on the pieces axle i touches)
+// bounds F from above there (and the smallest values from below). Blocks are
+// evaluated best bound first, and the search stops when no bound left can
+// beat the best value found (by more than 1e-11 of sum(w) x max|eta|): the
+// result is the exact extreme, usually after evaluating a tenth of the
+// breakpoints.
 //
 // Relieving axles (AxleRule::drop_relieving, AASHTO LRFD 3.6.1.3.1): an axle
 // whose ordinate has the sign opposite to the extreme sought contributes
 // zero, i.e. the maximum uses max(eta, 0) and the minimum min(eta, 0) per
-// axle. Those clipped lines are still piecewise cubic, with extra kinks where
-// eta changes sign; an evaluated interval is cut there.
+// axle. Those clipped lines are piecewise cubic too, with extra kinks where
+// eta changes sign: the evaluation adds those crossings as events, with the
+// clipped jumps of EffectCurve, and the bounds use the clipped piece ranges.
 //
 // Units: stations and offsets m, weights N, effects N x ordinate unit.
 // A train entirely off the girder gives zero, so the maximum is never below
@@ -49,12 +60,9 @@ struct AxleGroup {
 
 // One place where an extreme can be.
 struct SweepCandidate {
-  static constexpr std::uint32_t kOff = std::numeric_limits<std::uint32_t>::max();
-
   Real lead = 0;  // m, lead-axle station
   Approach approach = Approach::exact;
-  Real value = 0;                 // F there, exact
-  std::uint32_t interval = kOff;  // interval of the sweep holding it; kOff: the group is off the girder
+  Real value = 0;  // F there
 };
 
 struct SweepExtremes {
@@ -62,65 +70,92 @@ struct SweepExtremes {
   SweepCandidate minimum;  // value <= 0
 };
 
-// Work arrays reused between calls (one per thread).
+// Work space reused between calls (one per thread).
 struct SweepScratch {
-  std::vector<Real> upper;
-  std::vector<Real> lower;
+  struct RootEvent {
+    Real station;
+    Real weight;
+    std::uint32_t root;
+  };
+  std::vector<RootEvent> roots;
+  std::vector<Real> upper;  // per block
+  std::vector<Real> lower;  // per block
+  std::vector<std::uint8_t> done;
+  std::vector<std::uint32_t> order;
+};
+
+// What to keep from a sweep besides the extremes: for each extreme (index 0
+// maximum, 1 minimum) whose list is set, every candidate with
+// sign * value >= floor - tolerance, ascending in station: local extremes of
+// that sign inside intervals and one-sided values at breakpoints, among them
+// the zero values where the group has just come onto or gone off the girder.
+struct SweepKeep {
+  std::vector<SweepCandidate>* list[2] = {nullptr, nullptr};
+  Real floor[2] = {0.0, 0.0};
 };
 
 class TrainSweep {
  public:
+  // Breakpoints per block of the pruning bound.
+  static constexpr std::size_t kBlockBreaks = 12;
+
   // Precondition: weights and offsets of equal, non-zero size; knots strictly
-  // increasing, at least two, fewer than 32767.
+  // increasing, at least two.
   TrainSweep(AxleGroup group, const std::vector<Real>& knots);
 
   [[nodiscard]] const AxleGroup& group() const { return group_; }
   [[nodiscard]] std::size_t axle_count() const { return group_.weights.size(); }
-  // Breakpoints of F (lead stations, m), ascending; intervals lie between
-  // consecutive breakpoints.
+  // Breakpoints of F (lead stations, m), ascending.
   [[nodiscard]] const std::vector<Real>& breakpoints() const { return breaks_; }
-  [[nodiscard]] std::size_t interval_count() const { return breaks_.empty() ? 0 : breaks_.size() - 1; }
-  // Piece of `curve` under axle `axle` throughout interval `interval` (-1:
-  // the axle is off the girder).
-  [[nodiscard]] int piece(std::size_t interval, std::size_t axle) const {
-    return pieces_[interval * axle_count() + axle];
-  }
+  [[nodiscard]] Real weight_sum() const { return weight_sum_; }
+  // sum(w) x max|eta|: the scale of F, against which "zero" is judged.
+  [[nodiscard]] Real scale(const EffectCurve& curve) const { return weight_sum_ * curve.scale(); }
 
   // Both extremes over every lead position. `curve` must be built on the
-  // knots given to the constructor.
-  [[nodiscard]] SweepExtremes extremes(const EffectCurve& curve, AxleRule rule, SweepScratch& scratch) const;
+  // knots given to the constructor. With `known` (values already reached
+  // elsewhere, maximum >= 0 >= minimum) an extreme that cannot beat its
+  // known value is not searched for: the one returned is then exact only if
+  // it beats the known one, and never beats it otherwise.
+  [[nodiscard]] SweepExtremes extremes(const EffectCurve& curve, AxleRule rule, SweepScratch& scratch,
+                                       ExtremePair<Real> known = {0.0, 0.0}) const;
 
-  // Every candidate of `extreme` whose value could reach `threshold`
-  // (sign(extreme) * value >= sign(extreme) * threshold, give or take
-  // rounding), ascending in lead station. Besides interior extremes this
-  // includes the one-sided values at breakpoints, among them the zero values
-  // where the group has just come onto or gone off the girder.
+  // The candidates asked for by `keep`, evaluating only the blocks that can
+  // hold one. The extremes returned are over those blocks only: never above
+  // the true ones, and equal to them wherever they reach the floors.
+  SweepExtremes candidates(const EffectCurve& curve, AxleRule rule, const SweepKeep& keep, SweepScratch& scratch) const;
+
+  // Convenience: the candidates of one extreme reaching `threshold`.
   void candidates(const EffectCurve& curve, AxleRule rule, Extreme extreme, Real threshold,
                   std::vector<SweepCandidate>& out, SweepScratch& scratch) const;
 
-  // Ordinate under axle `axle` for the lead axle at `candidate` (its interval
-  // fixes the pieces and so the one-sided limits).
-  [[nodiscard]] Real axle_ordinate(const EffectCurve& curve, const SweepCandidate& candidate, std::size_t axle) const;
-
  private:
-  struct Change {
-    std::uint32_t axle;
-    std::int32_t from;
-    std::int32_t to;
+  struct Crossing {
+    Real weight;
+    std::uint32_t knot;
+  };
+  // The pieces axle i touches over block j, and the one it stands on at the
+  // block's first breakpoint (just right of it); -1 where it is off.
+  struct Reach {
+    std::int32_t first = -1;
+    std::int32_t last = -1;
+    std::int32_t start = -1;
+    bool partly_off = false;
   };
 
-  void bounds(const EffectCurve& curve, AxleRule rule, SweepScratch& scratch) const;
-  // Calls sink(candidate) for every candidate of interval j; for
-  // drop_relieving the curve is clipped for `extreme`.
-  template <typename Sink>
-  void evaluate_interval(const EffectCurve& curve, AxleRule rule, Extreme extreme, std::size_t j, Sink&& sink) const;
+  [[nodiscard]] std::size_t block_count() const { return block_first_.size(); }
+  void bound_blocks(const EffectCurve& curve, AxleRule rule, SweepScratch& scratch) const;
+  // Evaluates block j, reporting every candidate to sink.maximum/minimum;
+  // `which` (clipped rule only) is the extreme whose clipped line is swept.
+  template <bool Clipped, typename Sink>
+  void evaluate_block(const EffectCurve& curve, std::size_t j, Extreme which, SweepScratch& scratch, Sink& sink) const;
 
   AxleGroup group_;
   std::vector<Real> knots_;
   std::vector<Real> breaks_;
-  std::vector<std::int16_t> pieces_;         // interval-major, axle_count() per interval
-  std::vector<std::uint32_t> change_begin_;  // per breakpoint, into changes_
-  std::vector<Change> changes_;
+  std::vector<std::uint32_t> crossing_begin_;  // per breakpoint, into crossings_; one extra at the end
+  std::vector<Crossing> crossings_;
+  std::vector<std::uint32_t> block_first_;  // first breakpoint of each block; it ends at the next one's
+  std::vector<Reach> reach_;                // block-major, axle_count() per block
   Real weight_sum_ = 0;
 };
 
