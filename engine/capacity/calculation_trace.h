@@ -25,10 +25,10 @@ struct CalculationStep {
 };
 
 struct CalculationTrace {
-  std::string title;                     // e.g. "reinforced concrete flexure, positive moment"
-  std::vector<CalculationStep> inputs;   // the values the calculation starts from
-  std::vector<CalculationStep> steps;    // intermediate and final values, in order
-  std::vector<std::string> notes;        // assumptions and limits applied, in words
+  std::string title;                    // e.g. "reinforced concrete flexure, positive moment"
+  std::vector<CalculationStep> inputs;  // the values the calculation starts from
+  std::vector<CalculationStep> steps;   // intermediate and final values, in order
+  std::vector<std::string> notes;       // assumptions and limits applied, in words
 
   void add_input(std::string symbol, std::string description, Real value, units::Quantity quantity);
   // Records a step and returns `value`, so a formula can be written once.

@@ -104,8 +104,8 @@ ConcreteFlexure concrete_flexure(const ConcreteFlexureSection& s, const Resistan
   if (flanged && a > s.flange_thickness) {
     // T-section behaviour (5.6.3.1.1-3): the overhangs carry alpha1 f'c (b - bw) hf.
     out.t_section = true;
-    t.add_note(fmt::format("rectangular trial gives a = {:.4g} m > hf: T-section behaviour (AASHTO LRFD 5.6.3.2.2)",
-                           a));
+    t.add_note(
+        fmt::format("rectangular trial gives a = {:.4g} m > hf: T-section behaviour (AASHTO LRFD 5.6.3.2.2)", a));
     c = t.add_step("c", "depth of the neutral axis",
                    prestressed ? "(Aps fpu + As fy - alpha1 f'c (b - bw) hf) / (alpha1 f'c beta1 bw + k Aps fpu / dp)"
                                : "(As fy - alpha1 f'c (b - bw) hf) / (alpha1 f'c beta1 bw)",
@@ -113,10 +113,10 @@ ConcreteFlexure concrete_flexure(const ConcreteFlexureSection& s, const Resistan
                        (alpha1 * fc * beta1 * s.web_width + strand_term),
                    Quantity::section_length, "AASHTO LRFD 5.6.3.1.1-3");
   } else {
-    c = t.add_step("c", "depth of the neutral axis",
-                   prestressed ? "(Aps fpu + As fy) / (alpha1 f'c beta1 b + k Aps fpu / dp)"
-                               : "As fy / (alpha1 f'c beta1 b)",
-                   c, Quantity::section_length, "AASHTO LRFD 5.6.3.1.1-4");
+    c = t.add_step(
+        "c", "depth of the neutral axis",
+        prestressed ? "(Aps fpu + As fy) / (alpha1 f'c beta1 b + k Aps fpu / dp)" : "As fy / (alpha1 f'c beta1 b)", c,
+        Quantity::section_length, "AASHTO LRFD 5.6.3.1.1-4");
   }
   a = t.add_step("a", "depth of the equivalent stress block", "beta1 c", beta1 * c, Quantity::section_length,
                  "AASHTO LRFD 5.6.2.2");
@@ -150,7 +150,8 @@ ConcreteFlexure concrete_flexure(const ConcreteFlexureSection& s, const Resistan
   }
 
   Real mn = strands.area * fps * (strands.centroid - a / 2) + bars.area * s.bar_yield * (bars.centroid - a / 2);
-  if (out.t_section) mn += alpha1 * fc * (s.flange_width - s.web_width) * s.flange_thickness * (a / 2 - s.flange_thickness / 2);
+  if (out.t_section)
+    mn += alpha1 * fc * (s.flange_width - s.web_width) * s.flange_thickness * (a / 2 - s.flange_thickness / 2);
   std::string mn_expression = prestressed ? "Aps fps (dp - a/2)" : "";
   if (bars.area > 0) mn_expression += prestressed ? " + As fy (ds - a/2)" : "As fy (ds - a/2)";
   if (out.t_section) mn_expression += " + alpha1 f'c (b - bw) hf (a/2 - hf/2)";
@@ -158,8 +159,7 @@ ConcreteFlexure concrete_flexure(const ConcreteFlexureSection& s, const Resistan
                   out.t_section ? "AASHTO LRFD 5.6.3.2.2-1" : "AASHTO LRFD 5.6.3.2.2-1 with bw = b (5.6.3.2.3)");
 
   const Real eps_t = t.add_step("eps_t", "net tensile strain in the extreme tension steel", "0.003 (dt - c) / c",
-                                kCrushingStrain * (extreme - c) / c, Quantity::dimensionless,
-                                "AASHTO LRFD 5.6.2.1");
+                                kCrushingStrain * (extreme - c) / c, Quantity::dimensionless, "AASHTO LRFD 5.6.2.1");
   const Real eps_cl = compression_controlled_strain_limit(prestressed, s.bar_yield, s.bar_modulus);
   const Real eps_tl = tension_controlled_strain_limit(prestressed, s.bar_yield);
   const ResistanceFactorId tension_id =
@@ -169,10 +169,10 @@ ConcreteFlexure concrete_flexure(const ConcreteFlexureSection& s, const Resistan
              Quantity::dimensionless, "AASHTO LRFD 5.6.2.1");
   t.add_step("eps_tl", "tension-controlled strain limit", "0.005", eps_tl, Quantity::dimensionless,
              "AASHTO LRFD 5.6.2.1");
-  const Real phi = t.add_step("phi", fmt::format("resistance factor ({})", to_string(out.control.regime)),
-                              "phi_c + (phi_t - phi_c)(eps_t - eps_cl)/(eps_tl - eps_cl), in [phi_c, phi_t]",
-                              out.control.phi, Quantity::dimensionless,
-                              prestressed ? "AASHTO LRFD 5.5.4.2-1" : "AASHTO LRFD 5.5.4.2-2");
+  const Real phi =
+      t.add_step("phi", fmt::format("resistance factor ({})", to_string(out.control.regime)),
+                 "phi_c + (phi_t - phi_c)(eps_t - eps_cl)/(eps_tl - eps_cl), in [phi_c, phi_t]", out.control.phi,
+                 Quantity::dimensionless, prestressed ? "AASHTO LRFD 5.5.4.2-1" : "AASHTO LRFD 5.5.4.2-2");
   t.add_note(fmt::format("phi_t = {:.2f} ({}); phi_c = {:.2f} ({})", factors.get(tension_id),
                          factors.source(tension_id), factors.compression_controlled,
                          factors.source(ResistanceFactorId::compression_controlled)));

@@ -31,37 +31,36 @@ struct ReinforcementLayer {
 };
 
 struct ConcreteFlexureSection {
-  std::string label;          // names the section and sign in messages
-  Real height = 0;            // h, m, compression face to the far face
-  Real flange_width = 0;      // b, m, compression flange (== web_width for a rectangle)
-  Real flange_thickness = 0;  // hf, m; 0 = a rectangle web_width wide
-  Real web_width = 0;         // bw, m
-  Real concrete_strength = 0;  // f'c of the concrete in compression, Pa
-  std::vector<ReinforcementLayer> bars;  // mild steel in tension
-  Real bar_yield = 0;                    // fy, Pa (needed when bars is not empty)
-  Real bar_modulus = 0;                  // Es, Pa
+  std::string label;                        // names the section and sign in messages
+  Real height = 0;                          // h, m, compression face to the far face
+  Real flange_width = 0;                    // b, m, compression flange (== web_width for a rectangle)
+  Real flange_thickness = 0;                // hf, m; 0 = a rectangle web_width wide
+  Real web_width = 0;                       // bw, m
+  Real concrete_strength = 0;               // f'c of the concrete in compression, Pa
+  std::vector<ReinforcementLayer> bars;     // mild steel in tension
+  Real bar_yield = 0;                       // fy, Pa (needed when bars is not empty)
+  Real bar_modulus = 0;                     // Es, Pa
   std::vector<ReinforcementLayer> strands;  // bonded prestressing steel in tension
   Real strand_tensile_strength = 0;         // fpu, Pa (needed when strands is not empty)
   Real strand_yield_strength = 0;           // fpy, Pa
 };
 
 struct ConcreteFlexure {
-  Resistance resistance;         // phi*Mn; unavailable without tension steel
-  bool t_section = false;        // a > hf: flange overhangs and web share the compression
-  Real neutral_axis_depth = 0;   // c, m
-  Real block_depth = 0;          // a = beta1 c, m
-  Real strand_stress = 0;        // fps, Pa (0 without strands)
-  Real tension_force = 0;        // As fy + Aps fps, N
-  Real effective_depth = 0;      // de, m, LRFD 5.7.2.8-2
-  Real shear_depth = 0;          // dv, m, LRFD 5.7.2.8
-  TensionControl control;        // eps_t and phi
+  Resistance resistance;        // phi*Mn; unavailable without tension steel
+  bool t_section = false;       // a > hf: flange overhangs and web share the compression
+  Real neutral_axis_depth = 0;  // c, m
+  Real block_depth = 0;         // a = beta1 c, m
+  Real strand_stress = 0;       // fps, Pa (0 without strands)
+  Real tension_force = 0;       // As fy + Aps fps, N
+  Real effective_depth = 0;     // de, m, LRFD 5.7.2.8-2
+  Real shear_depth = 0;         // dv, m, LRFD 5.7.2.8
+  TensionControl control;       // eps_t and phi
 };
 
 // Preconditions: height, widths (flange_width >= web_width when
 // flange_thickness > 0), f'c and the strengths of present steel positive,
 // every layer depth in (0, height]. A section without tension steel gives an
 // unavailable resistance naming `label`.
-[[nodiscard]] ConcreteFlexure concrete_flexure(const ConcreteFlexureSection& section,
-                                               const ResistanceFactors& factors);
+[[nodiscard]] ConcreteFlexure concrete_flexure(const ConcreteFlexureSection& section, const ResistanceFactors& factors);
 
 }  // namespace tenthpoint::capacity

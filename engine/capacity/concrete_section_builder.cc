@@ -57,7 +57,8 @@ ConcreteMemberSections reinforced_concrete_sections(const model::SectionDefiniti
   ConcreteFlexureSection& f = out.flexure;
   f.label = label_of(definition, sign);
   const Real fc = materials.girder_concrete->compressive_strength;
-  const Real deck_offset = composite ? definition.deck->haunch + definition.deck->thickness : 0.0;  // deck top above beam top
+  const Real deck_offset =
+      composite ? definition.deck->haunch + definition.deck->thickness : 0.0;  // deck top above beam top
   const Real h = beam.height + deck_offset;
   f.height = h;
   f.web_width = beam.web_width;
@@ -66,8 +67,9 @@ ConcreteMemberSections reinforced_concrete_sections(const model::SectionDefiniti
       f.flange_width = definition.deck->effective_width;
       f.flange_thickness = definition.deck->thickness;
       f.concrete_strength = deck_strength(materials, definition, file);
-      out.notes.push_back("deck taken as the compression flange over the beam's web width (haunch and beam flange "
-                          "left out, conservative)");
+      out.notes.push_back(
+          "deck taken as the compression flange over the beam's web width (haunch and beam flange "
+          "left out, conservative)");
     } else {
       f.flange_width = beam.flange_thickness > 0 ? beam.flange_width : beam.web_width;
       f.flange_thickness = beam.flange_thickness;
@@ -80,7 +82,8 @@ ConcreteMemberSections reinforced_concrete_sections(const model::SectionDefiniti
     f.concrete_strength = fc;
     for (const model::BarLayer& layer : beam.top_bars) f.bars.push_back({layer.area, h - layer.depth - deck_offset});
     if (composite) {
-      for (const model::BarLayer& layer : definition.deck->longitudinal_bars) f.bars.push_back({layer.area, h - layer.depth});
+      for (const model::BarLayer& layer : definition.deck->longitudinal_bars)
+        f.bars.push_back({layer.area, h - layer.depth});
     }
   }
   if (!f.bars.empty()) {
@@ -142,8 +145,9 @@ ConcreteMemberSections prestressed_sections(const model::SectionDefinition& defi
       f.flange_width = definition.deck->effective_width;
       f.flange_thickness = definition.deck->thickness;
       f.concrete_strength = deck_strength(materials, definition, file);
-      out.notes.push_back("deck taken as the compression flange; below it only the girder web width carries "
-                          "compression (haunch and precast top flange not in the model; conservative)");
+      out.notes.push_back(
+          "deck taken as the compression flange; below it only the girder web width carries "
+          "compression (haunch and precast top flange not in the model; conservative)");
     } else {
       f.flange_width = girder.web_width;
       f.flange_thickness = 0;
@@ -166,14 +170,16 @@ ConcreteMemberSections prestressed_sections(const model::SectionDefinition& defi
     f.flange_thickness = 0;
     f.concrete_strength = fc;
     if (composite) {
-      for (const model::BarLayer& layer : definition.deck->longitudinal_bars) f.bars.push_back({layer.area, top - layer.depth});
+      for (const model::BarLayer& layer : definition.deck->longitudinal_bars)
+        f.bars.push_back({layer.area, top - layer.depth});
     }
     if (!f.bars.empty()) {
       if (!materials.reinforcement) missing_material(file, "materials.reinforcement", definition.id, "deck bars");
       f.bar_yield = materials.reinforcement->yield_strength;
       f.bar_modulus = materials.reinforcement->modulus;
-      out.notes.push_back("negative moment: deck bars in tension, compression over the girder web width at the "
-                          "soffit (bottom flange not in the model; conservative); strands left out");
+      out.notes.push_back(
+          "negative moment: deck bars in tension, compression over the girder web width at the "
+          "soffit (bottom flange not in the model; conservative); strands left out");
     }
     for (const ReinforcementLayer& layer : f.bars) v.bar_area += layer.area;
     v.bar_modulus = f.bar_modulus;

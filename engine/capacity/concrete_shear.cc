@@ -66,8 +66,8 @@ Resistance concrete_shear(const ConcreteShearSection& s, Real dv, const std::opt
   if (method == ConcreteShearMethod::simplified) {
     t.add_step("beta", "factor for the tensile stress in cracked concrete", "2.0", beta, Quantity::dimensionless,
                "AASHTO LRFD 5.7.3.4.1");
-    t.add_step("theta", "angle of the diagonal compression", "45 degrees", theta_deg * units::kDegree,
-               Quantity::angle, "AASHTO LRFD 5.7.3.4.1");
+    t.add_step("theta", "angle of the diagonal compression", "45 degrees", theta_deg * units::kDegree, Quantity::angle,
+               "AASHTO LRFD 5.7.3.4.1");
     if (s.prestressed) {
       r.warnings.push_back(fmt::format(
           "{}: the simplified procedure of AASHTO LRFD 5.7.3.4.1 is written for nonprestressed sections; beta = 2, "
@@ -98,8 +98,7 @@ Resistance concrete_shear(const ConcreteShearSection& s, Real dv, const std::opt
     t.add_input("Nu", "factored axial force, tension positive", demand->axial, Quantity::force);
     // 5.7.3.4.2: |Mu| not less than |Vu - Vp| dv; Vp = 0 (straight strands).
     const Real mu = t.add_step("|Mu|", "moment used for eps_s", "max(|Mu|, |Vu - Vp| dv)",
-                               std::max(std::abs(demand->moment), vu * dv), Quantity::moment,
-                               "AASHTO LRFD 5.7.3.4.2");
+                               std::max(std::abs(demand->moment), vu * dv), Quantity::moment, "AASHTO LRFD 5.7.3.4.2");
     const Real fpo = 0.7 * s.strand_tensile_strength;
     if (s.strand_area > 0) {
       t.add_step("fpo", "locked-in strand stress", "0.7 fpu", fpo, Quantity::stress, "AASHTO LRFD 5.7.3.4.2");
@@ -135,10 +134,10 @@ Resistance concrete_shear(const ConcreteShearSection& s, Real dv, const std::opt
   }
 
   // 5.7.3.3-3 in kip, ksi, in: Vc = 0.0316 beta lambda sqrt(f'c) bv dv.
-  const Real vc = t.add_step("Vc", "nominal shear resistance of the concrete",
-                             "0.0316 beta lambda sqrt(f'c) bv dv (ksi, in)",
-                             kRootCoefficient * beta * s.density_factor * std::sqrt(fc_ksi) * bv_in * dv_in * units::kKip,
-                             Quantity::force, "AASHTO LRFD 5.7.3.3-3");
+  const Real vc =
+      t.add_step("Vc", "nominal shear resistance of the concrete", "0.0316 beta lambda sqrt(f'c) bv dv (ksi, in)",
+                 kRootCoefficient * beta * s.density_factor * std::sqrt(fc_ksi) * bv_in * dv_in * units::kKip,
+                 Quantity::force, "AASHTO LRFD 5.7.3.3-3");
   Real vs = 0;
   if (stirrups) {
     const Real theta = theta_deg * units::kDegree;
@@ -148,9 +147,9 @@ Resistance concrete_shear(const ConcreteShearSection& s, Real dv, const std::opt
   }
   const Real vp = 0;
   t.add_note("Vp = 0: straight strands only (no draped profile in the model)");
-  const Real limit = t.add_step("Vn,max", "upper limit on the nominal shear resistance", "0.25 f'c bv dv + Vp",
-                                0.25 * s.concrete_strength * s.web_width * dv + vp, Quantity::force,
-                                "AASHTO LRFD 5.7.3.3-2");
+  const Real limit =
+      t.add_step("Vn,max", "upper limit on the nominal shear resistance", "0.25 f'c bv dv + Vp",
+                 0.25 * s.concrete_strength * s.web_width * dv + vp, Quantity::force, "AASHTO LRFD 5.7.3.3-2");
   const Real vn = t.add_step("Vn", "nominal shear resistance", "min(Vc + Vs + Vp, 0.25 f'c bv dv + Vp)",
                              std::min(vc + vs + vp, limit), Quantity::force, "AASHTO LRFD 5.7.3.3-1, -2");
   const Real phi = factors.concrete_shear;
@@ -162,8 +161,8 @@ Resistance concrete_shear(const ConcreteShearSection& s, Real dv, const std::opt
   r.nominal = vn;
   r.phi = phi;
   r.factored = phi * vn;
-  r.article = method == ConcreteShearMethod::simplified ? "AASHTO LRFD 5.7.3.3, 5.7.3.4.1"
-                                                        : "AASHTO LRFD 5.7.3.3, 5.7.3.4.2";
+  r.article =
+      method == ConcreteShearMethod::simplified ? "AASHTO LRFD 5.7.3.3, 5.7.3.4.1" : "AASHTO LRFD 5.7.3.3, 5.7.3.4.2";
   return r;
 }
 

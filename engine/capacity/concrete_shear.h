@@ -39,19 +39,19 @@ struct ShearDemand {
 };
 
 struct ConcreteShearSection {
-  std::string label;          // names the section in messages
-  Real web_width = 0;         // bv, m
-  Real height = 0;            // h, m (for the 16 in limit of 5.7.3.4.1)
-  Real concrete_strength = 0;  // f'c of the web, Pa
-  Real density_factor = 1.0;   // lambda, LRFD 5.4.2.8 (1.0 normal weight)
+  std::string label;                    // names the section in messages
+  Real web_width = 0;                   // bv, m
+  Real height = 0;                      // h, m (for the 16 in limit of 5.7.3.4.1)
+  Real concrete_strength = 0;           // f'c of the web, Pa
+  Real density_factor = 1.0;            // lambda, LRFD 5.4.2.8 (1.0 normal weight)
   std::optional<Real> stirrup_area;     // Av, m^2 per set
   std::optional<Real> stirrup_spacing;  // s, m
   Real stirrup_yield = 0;               // fy of the stirrups, Pa (needed with stirrups)
   bool prestressed = false;
   // Steel on the flexural tension side, for eps_s of the general procedure.
-  Real bar_area = 0;     // As, m^2
-  Real bar_modulus = 0;  // Es, Pa
-  Real strand_area = 0;  // Aps, m^2
+  Real bar_area = 0;                 // As, m^2
+  Real bar_modulus = 0;              // Es, Pa
+  Real strand_area = 0;              // Aps, m^2
   Real strand_modulus = 0;           // Ep, Pa
   Real strand_tensile_strength = 0;  // fpu, Pa; fpo = 0.7 fpu (5.7.3.4.2)
 };

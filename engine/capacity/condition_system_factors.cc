@@ -47,9 +47,9 @@ ConditionSystemFactors condition_system_factors(const model::Bridge& bridge, con
     const int rating = inspection->superstructure_condition;
     const std::optional<Real> phi = policy.condition_factor(rating);
     if (!phi) {
-      throw InputError(inspection->where, "superstructure",
-                       fmt::format("condition rating {} is not in the condition-factor table of policy {}", rating,
-                                   policy.id));
+      throw InputError(
+          inspection->where, "superstructure",
+          fmt::format("condition rating {} is not in the condition-factor table of policy {}", rating, policy.id));
     }
     out.condition = *phi;
     out.condition_source = fmt::format(
@@ -79,8 +79,9 @@ ConditionSystemFactors condition_system_factors(const model::Bridge& bridge, con
   if (product < out.lower_limit) {
     out.product = out.lower_limit;
     out.lower_limit_applied = true;
-    out.product_source = fmt::format("phi_c phi_s = {:.4f} raised to the lower limit {:.2f} of policy {} (MBE 6A.4.2.1)",
-                                     product, out.lower_limit, policy.id);
+    out.product_source =
+        fmt::format("phi_c phi_s = {:.4f} raised to the lower limit {:.2f} of policy {} (MBE 6A.4.2.1)", product,
+                    out.lower_limit, policy.id);
   } else {
     out.product = product;
     out.product_source = fmt::format("phi_c phi_s = {:.4f} (not below the lower limit {:.2f} of policy {})", product,

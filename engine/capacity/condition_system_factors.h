@@ -37,8 +37,8 @@ struct ConditionSystemFactors {
   std::string product_source;
 };
 
-[[nodiscard]] ConditionSystemFactors condition_system_factors(const model::Bridge& bridge,
-                                                              const model::Policy& policy, model::ForceEffect effect,
+[[nodiscard]] ConditionSystemFactors condition_system_factors(const model::Bridge& bridge, const model::Policy& policy,
+                                                              model::ForceEffect effect,
                                                               std::optional<CalendarDate> as_of);
 
 }  // namespace tenthpoint::capacity

@@ -102,8 +102,8 @@ DeterioratedSection GirderCapacity::section_at(Real station, section::Side side)
     definition = tapered_[index]->section_at(station);
   } else {
     const std::string& id = girder_.segments[index].section;
-    const auto it = std::find_if(sections_.begin(), sections_.end(),
-                                 [&](const model::SectionDefinition& s) { return s.id == id; });
+    const auto it =
+        std::find_if(sections_.begin(), sections_.end(), [&](const model::SectionDefinition& s) { return s.id == id; });
     assert(it != sections_.end());  // the profile resolved every segment
     definition = *it;
   }
@@ -134,8 +134,9 @@ void GirderCapacity::finish(Resistance& r, const State& state) const {
                                      state.deteriorated.applied.size(), inspection_->date.to_iso()));
   }
   if (r.status == ResistanceStatus::computed && method_ == model::RatingMethod::lfr) {
-    r.warnings.push_back("resistances follow AASHTO LRFD; Load Factor Rating (Standard Specifications) capacities "
-                         "are not implemented");
+    r.warnings.push_back(
+        "resistances follow AASHTO LRFD; Load Factor Rating (Standard Specifications) capacities "
+        "are not implemented");
   }
 }
 
@@ -185,15 +186,15 @@ Resistance GirderCapacity::steel_flexure(const State& s, MomentSign sign, Real s
   const section::StageProperties& live = cracked ? *described.cracked_negative : described.noncomposite;
   assert(live.neutral_axis);
   const WebEdges web = web_edges(girder);
-  in.web_compression_depth = std::clamp(in.compression_on_top ? web.top - *live.neutral_axis
-                                                              : *live.neutral_axis - web.bottom,
-                                        0.0, girder.web.width);
+  in.web_compression_depth = std::clamp(
+      in.compression_on_top ? web.top - *live.neutral_axis : *live.neutral_axis - web.bottom, 0.0, girder.web.width);
   in.compression_modulus = in.compression_on_top ? live.section_modulus_top : live.section_modulus_bottom;
   in.tension_modulus = in.compression_on_top ? live.section_modulus_bottom : live.section_modulus_top;
   in.moduli = materials_.composite ? cracked_stage_moduli(analysis) : uncracked_stage_moduli(analysis);
   Resistance r = steel_flange_flexure(in, options_.resistance).resistance;
-  r.trace.add_note(cracked ? "Dc and the moment equivalent on the steel plus deck bars (AASHTO LRFD D6.3.1, 6.10.1.1.1c)"
-                           : "Dc and the moment equivalent on the steel section");
+  r.trace.add_note(cracked
+                       ? "Dc and the moment equivalent on the steel plus deck bars (AASHTO LRFD D6.3.1, 6.10.1.1.1c)"
+                       : "Dc and the moment equivalent on the steel section");
   return r;
 }
 
@@ -237,8 +238,8 @@ Resistance GirderCapacity::flexure(Real station, MomentSign sign, section::Side 
 Resistance GirderCapacity::shear(Real station, section::Side side, const std::optional<ShearDemand>& demand,
                                  MomentSign sign) const {
   if (capacity_.mode == model::CapacitySource::given) {
-    return given_resistance(capacity_.given, girder_.id, station, side, model::ForceEffect::shear,
-                            MomentSign::positive, losses_here(station, side));
+    return given_resistance(capacity_.given, girder_.id, station, side, model::ForceEffect::shear, MomentSign::positive,
+                            losses_here(station, side));
   }
   const State s = state_at(station, side);
   if (!s.deteriorated.section.description) {
@@ -264,8 +265,8 @@ Resistance GirderCapacity::shear(Real station, section::Side side, const std::op
           in.stiffener_spacing = d.transverse_stiffener_spacing;
           if (in.stiffener_spacing) {
             const Real spacing = *in.stiffener_spacing;
-            in.end_panel = station <= spacing + kStationTolerance ||
-                           station >= profile_.length() - spacing - kStationTolerance;
+            in.end_panel =
+                station <= spacing + kStationTolerance || station >= profile_.length() - spacing - kStationTolerance;
           }
           in.compression_flange_area = d.top_flange.width * d.top_flange.thickness;
           in.tension_flange_area = d.bottom_flange.width * d.bottom_flange.thickness;

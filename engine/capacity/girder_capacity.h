@@ -111,7 +111,7 @@ class GirderCapacity {
   std::optional<model::Inspection> inspection_;
   CapacityOptions options_;
   section::GirderSectionProfile profile_;
-  std::vector<Real> boundaries_;                                   // segment stations
+  std::vector<Real> boundaries_;                                         // segment stations
   std::vector<std::shared_ptr<const section::TaperedSection>> tapered_;  // per segment; null when prismatic
   std::vector<Real> brace_points_;
 };

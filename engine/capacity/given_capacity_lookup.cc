@@ -32,8 +32,8 @@ const model::GivenCapacity* find_given_capacity(const std::vector<model::GivenCa
     if (station < entry.start - kStationTolerance || station > entry.end + kStationTolerance) continue;
     const bool at_start = near(station, entry.start);
     const bool at_end = near(station, entry.end);
-    const bool faces = (!at_start && !at_end) || (at_start && side == section::Side::right) ||
-                       (at_end && side == section::Side::left);
+    const bool faces =
+        (!at_start && !at_end) || (at_start && side == section::Side::right) || (at_end && side == section::Side::left);
     if (faces) {
       if (facing == nullptr) facing = &entry;
     } else if (touching == nullptr) {
@@ -43,25 +43,25 @@ const model::GivenCapacity* find_given_capacity(const std::vector<model::GivenCa
   return facing != nullptr ? facing : touching;
 }
 
-Resistance given_resistance(const std::vector<model::GivenCapacity>& given, const std::string& girder_id,
-                            Real station, section::Side side, model::ForceEffect effect, MomentSign sign,
+Resistance given_resistance(const std::vector<model::GivenCapacity>& given, const std::string& girder_id, Real station,
+                            section::Side side, model::ForceEffect effect, MomentSign sign,
                             const std::vector<model::SectionLoss>& losses_here) {
   const char* field = effect == model::ForceEffect::shear ? "shear"
                       : sign == MomentSign::positive      ? "moment_positive"
                                                           : "moment_negative";
   const model::GivenCapacity* entry = find_given_capacity(given, girder_id, station, side);
   if (entry == nullptr) {
-    return Resistance::unavailable_because(fmt::format(
-        "no capacity.given region covers station {:.3f} m of girder {}; give one (capacity mode is given)", station,
-        girder_id));
+    return Resistance::unavailable_because(
+        fmt::format("no capacity.given region covers station {:.3f} m of girder {}; give one (capacity mode is given)",
+                    station, girder_id));
   }
   const std::optional<Real>& value = effect == model::ForceEffect::shear ? entry->shear
                                      : sign == MomentSign::positive      ? entry->moment_positive
                                                                          : entry->moment_negative;
   if (!value) {
-    return Resistance::unavailable_because(fmt::format(
-        "{}: the capacity.given region {:.3f} m to {:.3f} m has no {}; give it", entry->where.to_string(),
-        entry->start, entry->end, field));
+    return Resistance::unavailable_because(
+        fmt::format("{}: the capacity.given region {:.3f} m to {:.3f} m has no {}; give it", entry->where.to_string(),
+                    entry->start, entry->end, field));
   }
   Resistance r;
   r.status = ResistanceStatus::given;

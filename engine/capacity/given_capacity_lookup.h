@@ -39,9 +39,8 @@ namespace tenthpoint::capacity {
 // station, status given; unavailable, naming what to add, when no region
 // covers the station or the region lacks the value. `losses_here` are the
 // section losses of the inspection in force at the station (for the warning).
-[[nodiscard]] Resistance given_resistance(const std::vector<model::GivenCapacity>& given,
-                                          const std::string& girder_id, Real station, section::Side side,
-                                          model::ForceEffect effect, MomentSign sign,
+[[nodiscard]] Resistance given_resistance(const std::vector<model::GivenCapacity>& given, const std::string& girder_id,
+                                          Real station, section::Side side, model::ForceEffect effect, MomentSign sign,
                                           const std::vector<model::SectionLoss>& losses_here);
 
 }  // namespace tenthpoint::capacity

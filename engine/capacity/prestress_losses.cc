@@ -58,17 +58,17 @@ PrestressLosses approximate_prestress_losses(const model::PrestressedGirder& gir
   const Real fci = t.add_step("f'ci", "girder concrete strength at transfer (assumed)", "ratio x f'c",
                               options.transfer_strength_ratio * concrete.compressive_strength, Quantity::stress,
                               "assumption; the model holds no transfer strength");
-  const Real eci = t.add_step("Eci", "girder concrete modulus at transfer", "AASHTO LRFD 5.4.2.4 from f'ci",
-                              section::concrete_modulus(fci, concrete.unit_weight, formula, k1,
-                                                        "materials.girder_concrete"),
-                              Quantity::stress, "AASHTO LRFD 5.4.2.4");
+  const Real eci =
+      t.add_step("Eci", "girder concrete modulus at transfer", "AASHTO LRFD 5.4.2.4 from f'ci",
+                 section::concrete_modulus(fci, concrete.unit_weight, formula, k1, "materials.girder_concrete"),
+                 Quantity::stress, "AASHTO LRFD 5.4.2.4");
 
   // fcgp = Aps (fpj - dES) (1/A + e^2/I), dES = (Ep/Eci) fcgp: linear in dES.
   const Real stiffness = 1.0 / girder.area + eccentricity * eccentricity / girder.inertia;
   const Real n = strand.modulus / eci;
-  const Real des = t.add_step("dfpES", "elastic shortening loss", "(Ep / Eci) fcgp, fcgp = Aps (fpj - dfpES)(1/Ag + e^2/Ig)",
-                              n * aps * fpj * stiffness / (1.0 + n * aps * stiffness), Quantity::stress,
-                              "AASHTO LRFD 5.9.3.2.3a-1");
+  const Real des =
+      t.add_step("dfpES", "elastic shortening loss", "(Ep / Eci) fcgp, fcgp = Aps (fpj - dfpES)(1/Ag + e^2/Ig)",
+                 n * aps * fpj * stiffness / (1.0 + n * aps * stiffness), Quantity::stress, "AASHTO LRFD 5.9.3.2.3a-1");
   t.add_note("fcgp without the girder self-weight moment (conservative: larger loss)");
 
   const Real h = options.relative_humidity;
@@ -78,20 +78,22 @@ PrestressLosses approximate_prestress_losses(const model::PrestressedGirder& gir
   const Real gamma_st = t.add_step("gamma_st", "concrete strength correction factor", "5 / (1 + f'ci) (ksi)",
                                    5.0 / (1.0 + fci_ksi), Quantity::dimensionless, "AASHTO LRFD 5.9.3.3-3");
   const Real relaxation_ksi = strand.low_relaxation ? 2.4 : 10.0;
-  t.add_step("dfpR", "relaxation loss", strand.low_relaxation ? "2.4 ksi (low relaxation)" : "10.0 ksi (stress relieved)",
+  t.add_step("dfpR", "relaxation loss",
+             strand.low_relaxation ? "2.4 ksi (low relaxation)" : "10.0 ksi (stress relieved)",
              relaxation_ksi * units::kKsi, Quantity::stress, "AASHTO LRFD 5.9.3.3 (from memory)");
   const Real fpi_ksi = fpj / units::kKsi;
-  const Real lt_ksi = 10.0 * fpi_ksi * aps / girder.area * gamma_h * gamma_st + 12.0 * gamma_h * gamma_st +
-                      relaxation_ksi;
-  const Real dlt = t.add_step("dfpLT", "long-term losses",
-                              "10.0 fpi Aps / Ag gamma_h gamma_st + 12.0 gamma_h gamma_st + dfpR (ksi)",
-                              lt_ksi * units::kKsi, Quantity::stress, "AASHTO LRFD 5.9.3.3-1");
+  const Real lt_ksi =
+      10.0 * fpi_ksi * aps / girder.area * gamma_h * gamma_st + 12.0 * gamma_h * gamma_st + relaxation_ksi;
+  const Real dlt =
+      t.add_step("dfpLT", "long-term losses", "10.0 fpi Aps / Ag gamma_h gamma_st + 12.0 gamma_h gamma_st + dfpR (ksi)",
+                 lt_ksi * units::kKsi, Quantity::stress, "AASHTO LRFD 5.9.3.3-1");
   out.elastic_shortening = des;
   out.long_term = dlt;
   out.effective_prestress = t.add_step("fpe", "effective prestress after all losses", "fpj - dfpES - dfpLT",
                                        fpj - des - dlt, Quantity::stress, "AASHTO LRFD 5.9.3.1");
-  t.add_note("approximate method of AASHTO LRFD 5.9.3.3, meant for standard precast pretensioned members under "
-             "average exposure");
+  t.add_note(
+      "approximate method of AASHTO LRFD 5.9.3.3, meant for standard precast pretensioned members under "
+      "average exposure");
   return out;
 }
 

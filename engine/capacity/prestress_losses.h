@@ -44,9 +44,9 @@ struct PrestressLossOptions {
 };
 
 struct PrestressLosses {
-  Real jacking_stress = 0;      // fpj, Pa
-  Real elastic_shortening = 0;  // dfpES, Pa
-  Real long_term = 0;           // dfpLT, Pa
+  Real jacking_stress = 0;       // fpj, Pa
+  Real elastic_shortening = 0;   // dfpES, Pa
+  Real long_term = 0;            // dfpLT, Pa
   Real effective_prestress = 0;  // fpe, Pa
   CalculationTrace trace;
 };

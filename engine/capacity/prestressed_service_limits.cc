@@ -49,15 +49,15 @@ PrestressedServiceLimits prestressed_service_limits(const std::string& label, co
     out.allowable_tension = t.add_step("fR", "allowable tension (given in the options)", "given",
                                        *options.allowable_tension, Quantity::stress, "capacity options");
   } else if (options.exposure == CorrosionExposure::moderate) {
-    out.allowable_tension = t.add_step("fR", "allowable tension, not worse than moderate corrosion",
-                                       "0.19 lambda sqrt(f'c) <= 0.6 ksi",
-                                       std::min(0.19 * density_factor * std::sqrt(fc_ksi), 0.6) * units::kKsi,
-                                       Quantity::stress, "AASHTO LRFD Table 5.9.2.3.2b-1; MBE 6A.5.4.2.2b (from memory)");
+    out.allowable_tension =
+        t.add_step("fR", "allowable tension, not worse than moderate corrosion", "0.19 lambda sqrt(f'c) <= 0.6 ksi",
+                   std::min(0.19 * density_factor * std::sqrt(fc_ksi), 0.6) * units::kKsi, Quantity::stress,
+                   "AASHTO LRFD Table 5.9.2.3.2b-1; MBE 6A.5.4.2.2b (from memory)");
   } else {
-    out.allowable_tension = t.add_step("fR", "allowable tension, severe corrosion",
-                                       "0.0948 lambda sqrt(f'c) <= 0.3 ksi",
-                                       std::min(0.0948 * density_factor * std::sqrt(fc_ksi), 0.3) * units::kKsi,
-                                       Quantity::stress, "AASHTO LRFD Table 5.9.2.3.2b-1 (from memory)");
+    out.allowable_tension =
+        t.add_step("fR", "allowable tension, severe corrosion", "0.0948 lambda sqrt(f'c) <= 0.3 ksi",
+                   std::min(0.0948 * density_factor * std::sqrt(fc_ksi), 0.3) * units::kKsi, Quantity::stress,
+                   "AASHTO LRFD Table 5.9.2.3.2b-1 (from memory)");
   }
 
   if (girder.effective_prestress) {

@@ -47,9 +47,9 @@ struct PrestressedServiceOptions {
 struct PrestressedServiceLimits {
   ResistanceStatus status = ResistanceStatus::computed;  // computed or unavailable
   std::string reason;                                    // when unavailable
-  Real allowable_tension = 0;        // fR, Pa, positive
-  Real prestress_bottom_stress = 0;  // fP, Pa, tension positive (negative = precompression)
-  Real effective_prestress = 0;      // fpe, Pa
+  Real allowable_tension = 0;                            // fR, Pa, positive
+  Real prestress_bottom_stress = 0;                      // fP, Pa, tension positive (negative = precompression)
+  Real effective_prestress = 0;                          // fpe, Pa
   bool effective_prestress_estimated = false;
   Real prestress_force = 0;  // P, N
   Real eccentricity = 0;     // e, m, strand centroid below the precast centroid
@@ -60,12 +60,9 @@ struct PrestressedServiceLimits {
 
 // Unavailable (with the reason) when the girder has no strands. Throws
 // InputError when materials.girder_concrete or materials.strand is missing.
-[[nodiscard]] PrestressedServiceLimits prestressed_service_limits(const std::string& label,
-                                                                  const model::PrestressedGirder& girder,
-                                                                  const model::Materials& materials,
-                                                                  const section::SectionStages& stages,
-                                                                  const PrestressedServiceOptions& options,
-                                                                  const section::SectionOptions& section_options,
-                                                                  Real density_factor);
+[[nodiscard]] PrestressedServiceLimits prestressed_service_limits(
+    const std::string& label, const model::PrestressedGirder& girder, const model::Materials& materials,
+    const section::SectionStages& stages, const PrestressedServiceOptions& options,
+    const section::SectionOptions& section_options, Real density_factor);
 
 }  // namespace tenthpoint::capacity

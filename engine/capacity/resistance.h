@@ -46,9 +46,9 @@ struct FlangeStressResistance {
 
 struct Resistance {
   ResistanceStatus status = ResistanceStatus::unavailable;
-  Real nominal = 0;   // Mn [N*m] or Vn [N]; 0 unless computed
-  Real phi = 0;       // resistance factor applied; 0 unless computed
-  Real factored = 0;  // phi * nominal, or the given value
+  Real nominal = 0;     // Mn [N*m] or Vn [N]; 0 unless computed
+  Real phi = 0;         // resistance factor applied; 0 unless computed
+  Real factored = 0;    // phi * nominal, or the given value
   std::string article;  // the governing article, e.g. "AASHTO LRFD 6.10.7.1.2-2"
   std::string reason;   // unavailable: what is missing; given: where the value came from
   std::vector<std::string> warnings;

@@ -41,8 +41,8 @@ Real reduced_thickness(const model::SectionLoss& loss, Real thickness, const cha
     out = thickness * remaining_fraction(loss);
   }
   if (!(out > 0)) {
-    reject(loss, fmt::format("leaves no {} (thickness {:.4g} mm); model the member as lost or give its capacity",
-                             what, thickness * 1000.0));
+    reject(loss, fmt::format("leaves no {} (thickness {:.4g} mm); model the member as lost or give its capacity", what,
+                             thickness * 1000.0));
   }
   return out;
 }
@@ -106,7 +106,8 @@ bool apply_to_steel(DeterioratedSection& out, model::SteelIGirder& girder, const
                                                    : (*cover)->thickness * remaining_fraction(loss);
         if (remaining > 0) {
           (*cover)->thickness = remaining;
-          out.notes.push_back(fmt::format("{}: cover plate thickness now {:.4g} mm", describe(loss), remaining * 1000.0));
+          out.notes.push_back(
+              fmt::format("{}: cover plate thickness now {:.4g} mm", describe(loss), remaining * 1000.0));
         } else {
           cover->reset();
           out.notes.push_back(fmt::format("{}: cover plate lost entirely and removed", describe(loss)));
@@ -133,7 +134,8 @@ bool apply_to_rc(DeterioratedSection& out, model::ReinforcedConcreteBeam& beam, 
     const Real fraction = area_fraction_only(loss, "bar");
     scale_bars(beam.bottom_bars, fraction);
     scale_bars(beam.top_bars, fraction);
-    out.notes.push_back(fmt::format("{}: every bar layer reduced to {:g} % of its area", describe(loss), fraction * 100));
+    out.notes.push_back(
+        fmt::format("{}: every bar layer reduced to {:g} % of its area", describe(loss), fraction * 100));
     return true;
   }
   if (loss.element == SectionElement::deck) {
@@ -151,7 +153,8 @@ bool apply_to_rc(DeterioratedSection& out, model::ReinforcedConcreteBeam& beam, 
         if (!(layer.depth > 0)) reject(loss, "removes the concrete over a bar layer; give the capacity instead");
       }
     }
-    out.notes.push_back(fmt::format("{}: top surface lowered, height now {:.4g} mm", describe(loss), beam.height * 1000));
+    out.notes.push_back(
+        fmt::format("{}: top surface lowered, height now {:.4g} mm", describe(loss), beam.height * 1000));
     return true;
   }
   reject(loss, fmt::format("element {} does not belong to the reinforced concrete section {}", to_string(loss.element),
@@ -163,8 +166,8 @@ bool apply_to_ps(DeterioratedSection& out, model::PrestressedGirder& girder, con
   if (loss.element == SectionElement::strands) {
     const Real fraction = area_fraction_only(loss, "strand");
     for (model::StrandLayer& layer : girder.strands) layer.strand_area *= fraction;
-    out.notes.push_back(
-        fmt::format("{}: strand area reduced to {:g} % (as losing that share of the strands)", describe(loss), fraction * 100));
+    out.notes.push_back(fmt::format("{}: strand area reduced to {:g} % (as losing that share of the strands)",
+                                    describe(loss), fraction * 100));
     return true;
   }
   if (loss.element == SectionElement::bars || loss.element == SectionElement::deck) return apply_to_deck(out, loss);
@@ -202,9 +205,10 @@ DeterioratedSection apply_section_loss(const model::SectionDefinition& section,
   if (losses.empty()) return out;
   if (!section.description) {
     for (const model::SectionLoss& loss : losses) {
-      out.warnings.push_back(fmt::format("{}: section {} has only given properties (no description), so the loss "
-                                         "cannot be applied",
-                                         describe(loss), section.id));
+      out.warnings.push_back(
+          fmt::format("{}: section {} has only given properties (no description), so the loss "
+                      "cannot be applied",
+                      describe(loss), section.id));
     }
     return out;
   }

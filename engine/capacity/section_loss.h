@@ -51,14 +51,14 @@ namespace tenthpoint::capacity {
 // The losses of `inspection` on girder line `girder_id` that apply at the
 // station, in the inspection's order.
 [[nodiscard]] std::vector<model::SectionLoss> losses_at(const model::Inspection& inspection,
-                                                        const std::string& girder_id, Real station,
-                                                        section::Side side, Real girder_length);
+                                                        const std::string& girder_id, Real station, section::Side side,
+                                                        Real girder_length);
 
 struct DeterioratedSection {
-  model::SectionDefinition section;          // the reduced section (or the original when nothing applied)
-  std::vector<model::SectionLoss> applied;   // the losses that changed it
-  std::vector<std::string> notes;            // what each applied loss did, in words
-  std::vector<std::string> warnings;         // losses that found nothing to act on
+  model::SectionDefinition section;         // the reduced section (or the original when nothing applied)
+  std::vector<model::SectionLoss> applied;  // the losses that changed it
+  std::vector<std::string> notes;           // what each applied loss did, in words
+  std::vector<std::string> warnings;        // losses that found nothing to act on
 
   [[nodiscard]] bool reduced() const { return !applied.empty(); }
 };

@@ -25,8 +25,8 @@ CompositePositiveFlexure composite_positive_flexure(const CompositePositiveFlexu
                                                     const ResistanceFactors& factors) {
   assert(in.stages.composite && in.stages.short_term);
   CompositePositiveFlexure out;
-  out.plastic = composite_plastic_moment(in.girder, in.deck, in.steel_yield, in.deck_strength,
-                                         in.include_deck_bars, in.deck_bar_yield);
+  out.plastic = composite_plastic_moment(in.girder, in.deck, in.steel_yield, in.deck_strength, in.include_deck_bars,
+                                         in.deck_bar_yield);
   Resistance& r = out.resistance;
   CalculationTrace& t = r.trace;
   t.title = fmt::format("{}: composite steel girder, positive flexure", in.label);
@@ -35,20 +35,20 @@ CompositePositiveFlexure composite_positive_flexure(const CompositePositiveFlexu
 
   const Real d = in.girder.web.width;
   const Real tw = in.girder.web.thickness;
-  const Real web_ratio = t.add_step("D/tw", "web slenderness", "D / tw", d / tw, Quantity::dimensionless,
-                                    "AASHTO LRFD 6.10.2.1.1");
+  const Real web_ratio =
+      t.add_step("D/tw", "web slenderness", "D / tw", d / tw, Quantity::dimensionless, "AASHTO LRFD 6.10.2.1.1");
   const Real compact_limit = t.add_step("3.76 sqrt(E/Fyc)", "compact web limit", "3.76 sqrt(E / Fyc)",
                                         3.76 * std::sqrt(in.steel_modulus / in.steel_yield), Quantity::dimensionless,
                                         "AASHTO LRFD 6.10.6.2.2-1");
-  const Real web_compact_ratio = t.add_step("2Dcp/tw", "web slenderness at the plastic moment", "2 Dcp / tw",
-                                            2.0 * out.plastic.web_compression_depth / tw, Quantity::dimensionless,
-                                            "AASHTO LRFD 6.10.6.2.2-1");
-  out.compact = in.steel_yield <= kCompactYieldLimit && web_ratio <= kWebProportionLimit &&
-                web_compact_ratio <= compact_limit;
+  const Real web_compact_ratio =
+      t.add_step("2Dcp/tw", "web slenderness at the plastic moment", "2 Dcp / tw",
+                 2.0 * out.plastic.web_compression_depth / tw, Quantity::dimensionless, "AASHTO LRFD 6.10.6.2.2-1");
+  out.compact =
+      in.steel_yield <= kCompactYieldLimit && web_ratio <= kWebProportionLimit && web_compact_ratio <= compact_limit;
   t.add_note(out.compact ? "compact section (AASHTO LRFD 6.10.6.2.2)" : "noncompact section (AASHTO LRFD 6.10.6.2.2)");
   if (web_ratio > kWebProportionLimit) {
-    r.warnings.push_back(fmt::format("{}: D/tw = {:.1f} exceeds the 150 of AASHTO LRFD 6.10.2.1.1", in.label,
-                                     web_ratio));
+    r.warnings.push_back(
+        fmt::format("{}: D/tw = {:.1f} exceeds the 150 of AASHTO LRFD 6.10.2.1.1", in.label, web_ratio));
   }
 
   const Real dp = out.plastic.depth_to_neutral_axis;
@@ -77,8 +77,9 @@ CompositePositiveFlexure composite_positive_flexure(const CompositePositiveFlexu
                       mp * (1.07 - 0.7 * dp / dt), Quantity::moment, "AASHTO LRFD 6.10.7.1.2-2");
       r.article = "AASHTO LRFD 6.10.7.1.2-2";
     }
-    t.add_note("the continuous-span limit Mn <= 1.3 Rh My (AASHTO LRFD 6.10.7.1.2-3) is not applied: My needs the "
-               "stage dead-load moments (D6.2.2)");
+    t.add_note(
+        "the continuous-span limit Mn <= 1.3 Rh My (AASHTO LRFD 6.10.7.1.2-3) is not applied: My needs the "
+        "stage dead-load moments (D6.2.2)");
     t.add_step("phi_f", "resistance factor for flexure", "phi_f", phi, Quantity::dimensionless, phi_source);
     t.add_step("phi Mn", "factored flexural resistance", "phi_f Mn", phi * mn, Quantity::moment,
                "AASHTO LRFD 6.10.7.1.1-1");
@@ -110,8 +111,8 @@ CompositePositiveFlexure composite_positive_flexure(const CompositePositiveFlexu
   }
   const Real fnc = t.add_step("Fnc", "nominal stress of the compression flange", "Rb Rh Fyc", rb * in.steel_yield,
                               Quantity::stress, "AASHTO LRFD 6.10.7.2.2-1");
-  const Real fnt = t.add_step("Fnt", "nominal stress of the tension flange", "Rh Fyt", in.steel_yield,
-                              Quantity::stress, "AASHTO LRFD 6.10.7.2.2-2");
+  const Real fnt = t.add_step("Fnt", "nominal stress of the tension flange", "Rh Fyt", in.steel_yield, Quantity::stress,
+                              "AASHTO LRFD 6.10.7.2.2-2");
   t.add_note("Rh = 1.0: flanges and web of one steel (homogeneous, AASHTO LRFD 6.10.1.10.1)");
   const section::StageProperties& st = *in.stages.short_term;
   if (!st.section_modulus_top || !st.section_modulus_bottom) {
@@ -125,8 +126,9 @@ CompositePositiveFlexure composite_positive_flexure(const CompositePositiveFlexu
                              "min(Fnc S_top, Fnt S_bottom)",
                              std::min(fnc * *st.section_modulus_top, fnt * *st.section_modulus_bottom),
                              Quantity::moment, "AASHTO LRFD 6.10.7.2.1");
-  t.add_note("the rating should use the flange-stress form (stage stresses against phi_f Fn); Mn here is its "
-             "moment equivalent for a section under live load alone");
+  t.add_note(
+      "the rating should use the flange-stress form (stage stresses against phi_f Fn); Mn here is its "
+      "moment equivalent for a section under live load alone");
   t.add_step("phi_f", "resistance factor for flexure", "phi_f", phi, Quantity::dimensionless, phi_source);
   r.status = ResistanceStatus::computed;
   r.nominal = mn;

@@ -26,14 +26,15 @@ SteelFlangeFlexure steel_flange_flexure(const SteelFlangeFlexureInput& in, const
   const Real tw = in.girder.web.thickness;
 
   const model::Plate& flange = in.compression_on_top ? in.girder.top_flange : in.girder.bottom_flange;
-  const std::optional<model::Plate>& cover = in.compression_on_top ? in.girder.top_cover_plate
-                                                                   : in.girder.bottom_cover_plate;
+  const std::optional<model::Plate>& cover =
+      in.compression_on_top ? in.girder.top_cover_plate : in.girder.bottom_cover_plate;
   const Real bfc = flange.width;
   Real afc = flange.width * flange.thickness;
   if (cover) {
     afc += cover->width * cover->thickness;
-    t.add_note("compression cover plate merged with its flange: one plate of the flange width and the combined area "
-               "(common practice)");
+    t.add_note(
+        "compression cover plate merged with its flange: one plate of the flange width and the combined area "
+        "(common practice)");
   }
   const Real tfc = afc / bfc;
   t.add_input("Fyc", "compression flange yield strength", fyc, Quantity::stress);
@@ -52,9 +53,8 @@ SteelFlangeFlexure steel_flange_flexure(const SteelFlangeFlexureInput& in, const
   const Real rb = shedding.factor;
   out.load_shedding = rb;
   const Real fyr = t.add_step("Fyr", "compression flange stress at the onset of yielding",
-                              "min(0.7 Fyc, Fyw), not less than 0.5 Fyc",
-                              std::max(std::min(0.7 * fyc, fyw), 0.5 * fyc), Quantity::stress,
-                              "AASHTO LRFD 6.10.8.2.2");
+                              "min(0.7 Fyc, Fyw), not less than 0.5 Fyc", std::max(std::min(0.7 * fyc, fyw), 0.5 * fyc),
+                              Quantity::stress, "AASHTO LRFD 6.10.8.2.2");
   const Real full = rb * fyc;  // Rb Rh Fyc
 
   // Local buckling, 6.10.8.2.2.
@@ -78,9 +78,9 @@ SteelFlangeFlexure steel_flange_flexure(const SteelFlangeFlexureInput& in, const
       const Real kc = t.add_step("kc", "flange local buckling coefficient", "4 / sqrt(D / tw), in [0.35, 0.76]",
                                  std::clamp(4.0 / std::sqrt(d / tw), 0.35, 0.76), Quantity::dimensionless,
                                  "AISC 360-16 Table B4.1b note [a]");
-      const Real elastic = t.add_step("Fcr(FLB)", "elastic local buckling stress", "0.9 E kc / lambda_f^2 Rb",
-                                      0.9 * e * kc / (lambda_f * lambda_f) * rb, Quantity::stress,
-                                      "AISC 360-16 Eq. F3-2");
+      const Real elastic =
+          t.add_step("Fcr(FLB)", "elastic local buckling stress", "0.9 E kc / lambda_f^2 Rb",
+                     0.9 * e * kc / (lambda_f * lambda_f) * rb, Quantity::stress, "AISC 360-16 Eq. F3-2");
       flb = t.add_step("Fnc(FLB)", "local buckling resistance (slender flange)", "min(6.10.8.2.2-2, Fcr)",
                        std::min(inelastic, elastic), Quantity::stress, "AASHTO LRFD 6.10.8.2.2-2; AISC 360-16 F3-2");
       r.warnings.push_back(fmt::format(
@@ -120,9 +120,8 @@ SteelFlangeFlexure steel_flange_flexure(const SteelFlangeFlexureInput& in, const
   }
   out.lateral_torsional_stress = ltb;
 
-  const Real fnc = t.add_step("Fnc", "nominal flexural resistance of the compression flange",
-                              "min(Fnc(FLB), Fnc(LTB))", std::min(flb, ltb), Quantity::stress,
-                              "AASHTO LRFD 6.10.8.2.1");
+  const Real fnc = t.add_step("Fnc", "nominal flexural resistance of the compression flange", "min(Fnc(FLB), Fnc(LTB))",
+                              std::min(flb, ltb), Quantity::stress, "AASHTO LRFD 6.10.8.2.1");
   const Real fnt = t.add_step("Fnt", "nominal flexural resistance of the tension flange", "Rh Fyt", in.steel_yield,
                               Quantity::stress, "AASHTO LRFD 6.10.8.3-1");
   const Real phi = factors.steel_flexure;
@@ -147,12 +146,13 @@ SteelFlangeFlexure steel_flange_flexure(const SteelFlangeFlexureInput& in, const
     r.flange_stress = stress;
     return out;
   }
-  const Real mn = t.add_step("Mn", "moment equivalent of the flange resistances on the live-load section",
-                             "min(Fnc S_c, Fnt S_t)",
-                             std::min(fnc * *in.compression_modulus, fnt * *in.tension_modulus), Quantity::moment,
-                             "AASHTO LRFD 6.10.8.1.1, 6.10.8.1.2");
-  t.add_note("the rating should use the flange-stress form (stage stresses M/S against phi_f Fn); Mn is its moment "
-             "equivalent for a moment acting on the live-load section alone");
+  const Real mn =
+      t.add_step("Mn", "moment equivalent of the flange resistances on the live-load section", "min(Fnc S_c, Fnt S_t)",
+                 std::min(fnc * *in.compression_modulus, fnt * *in.tension_modulus), Quantity::moment,
+                 "AASHTO LRFD 6.10.8.1.1, 6.10.8.1.2");
+  t.add_note(
+      "the rating should use the flange-stress form (stage stresses M/S against phi_f Fn); Mn is its moment "
+      "equivalent for a moment acting on the live-load section alone");
   t.add_step("phi Mn", "factored flexural resistance (moment equivalent)", "phi_f Mn", phi * mn, Quantity::moment,
              "AASHTO LRFD 1.3.2.1-1");
   r.status = ResistanceStatus::computed;

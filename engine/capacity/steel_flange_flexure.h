@@ -48,10 +48,10 @@ namespace tenthpoint::capacity {
 struct SteelFlangeFlexureInput {
   std::string label;  // names the section and sign in messages
   model::SteelIGirder girder;
-  Real steel_yield = 0;    // Fy of flanges and web, Pa
-  Real steel_modulus = 0;  // E, Pa
-  bool compression_on_top = false;  // true: positive moment of a non-composite girder
-  Real unbraced_length = 0;         // Lb, m
+  Real steel_yield = 0;               // Fy of flanges and web, Pa
+  Real steel_modulus = 0;             // E, Pa
+  bool compression_on_top = false;    // true: positive moment of a non-composite girder
+  Real unbraced_length = 0;           // Lb, m
   Real moment_gradient_factor = 1.0;  // Cb
   Real web_compression_depth = 0;     // Dc, m, elastic (D6.3.1)
   // Extreme-fibre section moduli of the live-load section at the compression
@@ -63,9 +63,9 @@ struct SteelFlangeFlexureInput {
 
 struct SteelFlangeFlexure {
   Resistance resistance;
-  Real local_buckling_stress = 0;      // Fnc by 6.10.8.2.2, Pa
-  Real lateral_torsional_stress = 0;   // Fnc by 6.10.8.2.3, Pa
-  Real load_shedding = 1.0;            // Rb
+  Real local_buckling_stress = 0;     // Fnc by 6.10.8.2.2, Pa
+  Real lateral_torsional_stress = 0;  // Fnc by 6.10.8.2.3, Pa
+  Real load_shedding = 1.0;           // Rb
 };
 
 // Preconditions: positive plates, Fy, E and Lb; Cb >= 1; Dc >= 0.

@@ -147,9 +147,9 @@ CompositePlasticMoment composite_plastic_moment(const model::SteelIGirder& girde
   t.add_input("haunch", "haunch depth (concrete left out)", deck.haunch, Quantity::section_length);
   t.add_input("D", "web depth", girder.web.width, Quantity::section_length);
   t.add_input("tw", "web thickness", girder.web.thickness, Quantity::section_length);
-  out.slab_force = t.add_step("Ps", "plastic force in the slab", "0.85 f'c beff ts",
-                              0.85 * deck_strength * deck.effective_width * deck.thickness, Quantity::force,
-                              "AASHTO LRFD D6.1");
+  out.slab_force =
+      t.add_step("Ps", "plastic force in the slab", "0.85 f'c beff ts",
+                 0.85 * deck_strength * deck.effective_width * deck.thickness, Quantity::force, "AASHTO LRFD D6.1");
   t.add_step("Pc", "plastic force in the top flange (and top cover plate)", "Fy Afc", top_force, Quantity::force,
              "AASHTO LRFD D6.1");
   t.add_step("Pw", "plastic force in the web", "Fyw D tw", web_force, Quantity::force, "AASHTO LRFD D6.1");
@@ -184,8 +184,8 @@ CompositePlasticMoment composite_plastic_moment(const model::SteelIGirder& girde
   } else {
     out.location = PlasticNeutralAxisLocation::bottom_flange;
   }
-  t.add_step("y_pna", fmt::format("height of the plastic neutral axis above the soffit (in the {})",
-                                  to_string(out.location)),
+  t.add_step("y_pna",
+             fmt::format("height of the plastic neutral axis above the soffit (in the {})", to_string(out.location)),
              "compression = tension (Table D6.1-1 equilibrium)", y, Quantity::section_length, "AASHTO LRFD D6.1");
   out.plastic_moment = t.add_step("Mp", "plastic moment", "sum of plastic forces x distance to the PNA",
                                   stack.moment_about(y), Quantity::moment, "AASHTO LRFD D6.1, Table D6.1-1");

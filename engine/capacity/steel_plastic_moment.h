@@ -34,11 +34,11 @@ struct CompositePlasticMoment {
   Real plastic_moment = 0;  // Mp, N*m
   Real neutral_axis = 0;    // PNA height above the soffit, m
   PlasticNeutralAxisLocation location = PlasticNeutralAxisLocation::slab;
-  Real total_depth = 0;                // Dt, m: top of deck to soffit (LRFD 6.10.7.3)
-  Real depth_to_neutral_axis = 0;      // Dp, m: top of deck to the PNA (LRFD 6.10.7.3)
-  Real web_compression_depth = 0;      // Dcp, m: web in compression at Mp (LRFD D6.3.2)
-  Real slab_force = 0;                 // Ps = 0.85 f'c beff ts, N
-  Real steel_force = 0;                // Fy times the steel area, N
+  Real total_depth = 0;            // Dt, m: top of deck to soffit (LRFD 6.10.7.3)
+  Real depth_to_neutral_axis = 0;  // Dp, m: top of deck to the PNA (LRFD 6.10.7.3)
+  Real web_compression_depth = 0;  // Dcp, m: web in compression at Mp (LRFD D6.3.2)
+  Real slab_force = 0;             // Ps = 0.85 f'c beff ts, N
+  Real steel_force = 0;            // Fy times the steel area, N
   CalculationTrace trace;
 };
 

@@ -26,9 +26,8 @@ SteelServiceLimits steel_service_limits(Real fyf, const section::SectionStages& 
   out.positive_moment = uncracked_stage_moduli(stages);
   out.negative_moment = uncracked_negative ? uncracked_stage_moduli(stages) : cracked_stage_moduli(stages);
   if (stages.composite) {
-    t.add_note(uncracked_negative
-                   ? "negative flexure: deck taken as effective (AASHTO LRFD 6.10.4.2.1, from memory)"
-                   : "negative flexure: cracked section (steel plus deck bars) for DC2, DW and LL");
+    t.add_note(uncracked_negative ? "negative flexure: deck taken as effective (AASHTO LRFD 6.10.4.2.1, from memory)"
+                                  : "negative flexure: cracked section (steel plus deck bars) for DC2, DW and LL");
   }
   t.add_note("web bend-buckling (AASHTO LRFD 6.10.4.2.2-4) not checked");
   return out;

@@ -37,13 +37,13 @@ Resistance steel_shear(const SteelShearInput& in, const ResistanceFactors& facto
 
   const Real vp = t.add_step("Vp", "plastic shear force", "0.58 Fyw D tw", 0.58 * in.web_yield * d * tw,
                              Quantity::force, "AASHTO LRFD 6.10.9.2-2");
-  const Real k = stiffened ? t.add_step("k", "shear-buckling coefficient", "5 + 5 / (do / D)^2",
-                                        5.0 + 5.0 / (ratio * ratio), Quantity::dimensionless,
-                                        "AASHTO LRFD 6.10.9.3.2-7")
-                           : t.add_step("k", "shear-buckling coefficient", "5 (unstiffened)", 5.0,
-                                        Quantity::dimensionless, "AASHTO LRFD 6.10.9.2");
-  const Real slenderness = t.add_step("D/tw", "web slenderness", "D / tw", d / tw, Quantity::dimensionless,
-                                      "AASHTO LRFD 6.10.9.3.2");
+  const Real k = stiffened
+                     ? t.add_step("k", "shear-buckling coefficient", "5 + 5 / (do / D)^2", 5.0 + 5.0 / (ratio * ratio),
+                                  Quantity::dimensionless, "AASHTO LRFD 6.10.9.3.2-7")
+                     : t.add_step("k", "shear-buckling coefficient", "5 (unstiffened)", 5.0, Quantity::dimensionless,
+                                  "AASHTO LRFD 6.10.9.2");
+  const Real slenderness =
+      t.add_step("D/tw", "web slenderness", "D / tw", d / tw, Quantity::dimensionless, "AASHTO LRFD 6.10.9.3.2");
   const Real root = std::sqrt(in.modulus * k / in.web_yield);
   Real c = 0;
   if (slenderness <= 1.12 * root) {
@@ -58,8 +58,8 @@ Resistance steel_shear(const SteelShearInput& in, const ResistanceFactors& facto
                    "AASHTO LRFD 6.10.9.3.2-6");
   }
   if (!stiffened && slenderness > 150.0) {
-    r.warnings.push_back(fmt::format("{}: unstiffened web with D/tw = {:.1f} > 150 (AASHTO LRFD 6.10.2.1.1)",
-                                     in.label, slenderness));
+    r.warnings.push_back(
+        fmt::format("{}: unstiffened web with D/tw = {:.1f} > 150 (AASHTO LRFD 6.10.2.1.1)", in.label, slenderness));
   }
 
   Real vn = 0;
@@ -73,10 +73,9 @@ Resistance steel_shear(const SteelShearInput& in, const ResistanceFactors& facto
     r.article = "AASHTO LRFD 6.10.9.3.3";
   } else {
     assert(in.compression_flange_area > 0 && in.tension_flange_area > 0);
-    const Real flange_ratio =
-        t.add_step("2Dtw/(Af)", "web to flange area ratio", "2 D tw / (bfc tfc + bft tft)",
-                   2.0 * d * tw / (in.compression_flange_area + in.tension_flange_area), Quantity::dimensionless,
-                   "AASHTO LRFD 6.10.9.3.2-1");
+    const Real flange_ratio = t.add_step("2Dtw/(Af)", "web to flange area ratio", "2 D tw / (bfc tfc + bft tft)",
+                                         2.0 * d * tw / (in.compression_flange_area + in.tension_flange_area),
+                                         Quantity::dimensionless, "AASHTO LRFD 6.10.9.3.2-1");
     const Real root_term = std::sqrt(1.0 + ratio * ratio);
     if (flange_ratio <= 2.5) {
       vn = t.add_step("Vn", "nominal shear resistance (interior panel, tension field)",
@@ -85,8 +84,7 @@ Resistance steel_shear(const SteelShearInput& in, const ResistanceFactors& facto
     } else {
       vn = t.add_step("Vn", "nominal shear resistance (interior panel, reduced tension field)",
                       "Vp [C + 0.87 (1 - C) / (sqrt(1 + (do/D)^2) + do/D)]",
-                      vp * (c + 0.87 * (1.0 - c) / (root_term + ratio)), Quantity::force,
-                      "AASHTO LRFD 6.10.9.3.2-8");
+                      vp * (c + 0.87 * (1.0 - c) / (root_term + ratio)), Quantity::force, "AASHTO LRFD 6.10.9.3.2-8");
     }
     t.add_note("flange areas are the flange plates alone (cover plates left out, conservative)");
     r.article = "AASHTO LRFD 6.10.9.3.2";

@@ -27,10 +27,10 @@ namespace tenthpoint::capacity {
 
 struct SteelShearInput {
   std::string label;
-  Real web_depth = 0;      // D, m
-  Real web_thickness = 0;  // tw, m
-  Real web_yield = 0;      // Fyw, Pa
-  Real modulus = 0;        // E, Pa
+  Real web_depth = 0;                     // D, m
+  Real web_thickness = 0;                 // tw, m
+  Real web_yield = 0;                     // Fyw, Pa
+  Real modulus = 0;                       // E, Pa
   std::optional<Real> stiffener_spacing;  // do, m; absent = unstiffened
   bool end_panel = false;                 // the panel next to a girder end (6.10.9.3.3)
   Real compression_flange_area = 0;       // bfc tfc, m^2

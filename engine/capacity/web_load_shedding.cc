@@ -25,8 +25,8 @@ WebLoadShedding web_load_shedding(Real dc, Real tw, Real bfc, Real tfc, Real fyc
   }
   t.add_step("awc", "web to compression-flange area ratio", "2 Dc tw / (bfc tfc)", out.area_ratio,
              Quantity::dimensionless, "AASHTO LRFD 6.10.1.10.2-5");
-  const Real rb = 1.0 - out.area_ratio / (1200.0 + 300.0 * out.area_ratio) *
-                            (out.web_slenderness - out.slenderness_limit);
+  const Real rb =
+      1.0 - out.area_ratio / (1200.0 + 300.0 * out.area_ratio) * (out.web_slenderness - out.slenderness_limit);
   out.factor = t.add_step("Rb", "web load-shedding factor", "1 - awc / (1200 + 300 awc) (2 Dc / tw - lambda_rw)",
                           std::min(1.0, rb), Quantity::dimensionless, "AASHTO LRFD 6.10.1.10.2-3");
   return out;
