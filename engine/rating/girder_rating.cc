@@ -122,6 +122,15 @@ DynamicAllowanceAt DynamicAllowanceAt::uniform(std::size_t points, Real im, bool
   return d;
 }
 
+GirderDistribution GirderDistribution::uniform(std::size_t points, Real moment_positive, Real moment_negative,
+                                               Real shear) {
+  GirderDistribution d;
+  d.moment_positive.assign(points, moment_positive);
+  d.moment_negative.assign(points, moment_negative);
+  d.shear.assign(points, shear);
+  return d;
+}
+
 std::vector<model::RatingLevel> rating_levels(model::VehicleCategory category) {
   using model::RatingLevel;
   if (category == model::VehicleCategory::design || category == model::VehicleCategory::lfr_design)
@@ -215,16 +224,16 @@ GirderRating rate_girder_line(const GirderRatingInputs& in) {
         {
           const Real im = in.impact.positive_moment[i];
           rate(i, RatedEffect::positive_moment, "", cap.positive, in.moment_factors, dm,
-               governing_live(*rated.envelope, EffectKind::moment, i, Extreme::maximum, g.moment_positive, im,
+               governing_live(*rated.envelope, EffectKind::moment, i, Extreme::maximum, g.moment_positive[i], im,
                               in.impact.applies_to_lane),
-               g.moment_positive, im);
+               g.moment_positive[i], im);
         }
         {
           const Real im = in.impact.negative_moment[i];
           rate(i, RatedEffect::negative_moment, "", cap.negative, in.moment_factors, DeadAt{-dm.dc, -dm.dw},
-               governing_live(*rated.envelope, EffectKind::moment, i, Extreme::minimum, g.moment_negative, im,
+               governing_live(*rated.envelope, EffectKind::moment, i, Extreme::minimum, g.moment_negative[i], im,
                               in.impact.applies_to_lane),
-               g.moment_negative, im);
+               g.moment_negative[i], im);
         }
         const Real im = in.impact.shear[i];
         for (int s = 0; s < 2; ++s) {
@@ -235,7 +244,8 @@ GirderRating rate_girder_line(const GirderRatingInputs& in) {
             const Real sign = live_load::sign_of(e);
             rate(i, RatedEffect::shear, left ? "left" : "right", cap.shear[s], in.shear_factors,
                  DeadAt{sign * dv.dc, sign * dv.dw},
-                 governing_live(*rated.envelope, kind, i, e, g.shear, im, in.impact.applies_to_lane), g.shear, im);
+                 governing_live(*rated.envelope, kind, i, e, g.shear[i], im, in.impact.applies_to_lane), g.shear[i],
+                 im);
           }
         }
       }

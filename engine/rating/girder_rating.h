@@ -42,12 +42,16 @@ enum class RatedEffect { positive_moment, negative_moment, shear };
 
 [[nodiscard]] std::string_view to_string(RatedEffect effect);
 
-// Lanes per girder for this girder line, multiple presence included.
+// Lanes per girder for this girder line, multiple presence included, per
+// analysis point and effect (factors differ by span and, for negative
+// moment, by support).
 struct GirderDistribution {
-  Real moment_positive = 0;
-  Real moment_negative = 0;
-  Real shear = 0;
-  std::string method;  // e.g. "AASHTO LRFD 4.6.2.2.2b-1, two or more lanes"
+  std::vector<Real> moment_positive;  // per analysis point
+  std::vector<Real> moment_negative;
+  std::vector<Real> shear;
+
+  [[nodiscard]] static GirderDistribution uniform(std::size_t points, Real moment_positive, Real moment_negative,
+                                                  Real shear);
 };
 
 // Dynamic allowance as a fraction, per analysis point and effect (LFR impact

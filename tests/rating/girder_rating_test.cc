@@ -89,7 +89,7 @@ TEST_CASE("a simple span rated for HL-93 reproduces the hand calculation at mids
   in.policy = &*policy.policy;
   in.moment_factors.product = 0.95;  // phi_c = 0.95 (fair), phi_s = 1.0
   in.shear_factors.product = 0.95;
-  in.distribution = {0.6, 0.6, 0.8, "test override"};
+  in.distribution = GirderDistribution::uniform(analysis.live_influence.points.size(), 0.6, 0.6, 0.8);
   in.impact = DynamicAllowanceAt::uniform(analysis.live_influence.points.size(), 0.33, false);
   in.load_models = {{hl93, &envelopes[0]}};
   const GirderRating rating = rate_girder_line(in);
