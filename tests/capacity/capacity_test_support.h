@@ -4,13 +4,16 @@
 #pragma once
 
 #include <functional>
+#include <optional>
 #include <string>
+#include <utility>
 
 #include <catch2/catch.hpp>
 
 #include "engine/capacity/calculation_trace.h"
 #include "engine/core/errors.h"
 #include "engine/core/units.h"
+#include "engine/model/materials.h"
 #include "engine/model/section.h"
 
 namespace tenthpoint::capacity::test {
@@ -31,6 +34,35 @@ inline Real to_kip(Real x) { return x / units::kKip; }
 inline Real to_kip_in(Real x) { return x / (units::kKip * units::kInch); }
 
 inline model::Plate plate(Real width_in, Real thickness_in) { return model::Plate{in(width_in), in(thickness_in)}; }
+
+// The EV-0207 Type IV girder: gross A = 789 in^2, I = 260,730 in^4, yb =
+// 24.73 in (AASHTO-PCI shape table, from memory), 46 strands of 0.153 in^2
+// at 2, 4, 6 and 8 in (12, 12, 12, 10 of them).
+inline model::PrestressedGirder type_iv(std::optional<double> fpe_ksi) {
+  model::PrestressedGirder g;
+  g.shape = "AASHTO Type IV";
+  g.height = in(54);
+  g.web_width = in(8);
+  g.area = in2(789);
+  g.inertia = in2(260730) * in2(1);
+  g.centroid_from_bottom = in(24.73);
+  for (const auto& [count, height] : {std::pair{12, 2.0}, {12, 4.0}, {12, 6.0}, {10, 8.0}}) {
+    g.strands.push_back(model::StrandLayer{count, in2(0.153), in(height)});
+  }
+  if (fpe_ksi) g.effective_prestress = ksi(*fpe_ksi);
+  return g;
+}
+
+inline model::Materials ps_materials() {
+  model::Materials m;
+  m.kind = model::MaterialKind::prestressed_concrete;
+  m.composite = true;
+  m.girder_concrete = model::Concrete{ksi(6), std::nullopt, test::kcf(0.150)};
+  m.deck_concrete = model::Concrete{ksi(4), std::nullopt, test::kcf(0.150)};
+  m.reinforcement = model::Reinforcement{ksi(60), ksi(29000)};
+  m.strand = model::PrestressingSteel{ksi(270), ksi(243), ksi(28500), true};
+  return m;
+}
 
 // The value of a traced step; fails the test when the step is missing.
 inline Real step(const CalculationTrace& trace, const std::string& symbol) {
