@@ -66,10 +66,6 @@ void strip_factor(const Context& c, Real span, DistributionFactor& f) {
   }
 }
 
-struct LeverValues {
-  FactoredLanes lanes;
-};
-
 FactoredLanes lever(const Context& c) {
   const Real s = c.girder.spacing;
   const auto rule =
