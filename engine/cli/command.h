@@ -29,5 +29,6 @@ class Command {
 
 std::unique_ptr<Command> make_check_command();
 std::unique_ptr<Command> make_diagrams_command();
+std::unique_ptr<Command> make_rate_command();
 
 }  // namespace tenthpoint::cli

@@ -107,3 +107,29 @@ TEST_CASE("diagrams writes influence lines of a demo bridge under a safe directo
   CHECK(doc["units"]["station"] == "ft");
   fs::remove_all(out);
 }
+
+TEST_CASE("rate rates the demo inventory, one bridge on request, and refuses a bad date", "[cli][rate]") {
+  Run r = run("rate inventory/ --date 2026-12-01");
+  INFO(r.output);
+  CHECK(r.exit_code == 0);
+  CHECK_THAT(r.output, Catch::Contains("bridges rated, 0 failed"));
+  r = run("rate inventory/ --bridge EV-0112 --date 2026-12-01");
+  CHECK(r.exit_code == 0);
+  CHECK_THAT(r.output, Catch::Contains("EV-0112  Willow Run Road Bridge"));
+  CHECK_THAT(r.output, Catch::Contains("HL93"));
+  CHECK_THAT(r.output, Catch::Contains("1 bridges rated"));
+  r = run("rate inventory/ --bridge NO-SUCH-ID");
+  CHECK(r.exit_code == 1);
+  CHECK_THAT(r.output, Catch::Contains("NO-SUCH-ID"));
+  r = run("rate inventory/ --date 2026-13-45");
+  CHECK(r.exit_code == 2);
+  CHECK_THAT(r.output, Catch::Contains("--date"));
+}
+
+TEST_CASE("a bridge that cannot be rated is reported as failed while the others are rated", "[cli][rate]") {
+  const Run r = run("rate inventory/ev-0112-willow-run.yaml tests/data/bad/negative-span.yaml --date 2026-12-01");
+  INFO(r.output);
+  CHECK(r.exit_code == 1);
+  CHECK_THAT(r.output, Catch::Contains("negative-span.yaml: failed"));
+  CHECK_THAT(r.output, Catch::Contains("1 bridges rated, 1 failed"));
+}
