@@ -149,7 +149,13 @@ BridgeRating rate_bridge(const model::Bridge& bridge, const model::Policy& polic
     const live_load::PreparedInfluenceLines lines(analysis.live_influence);
     const std::vector<live_load::MovingLoadEnvelope> envelopes =
         live_load::compute_moving_load_envelopes(lines, models, policy.vehicles);
-    const capacity::GirderCapacity capacity(bridge, girder);
+    // Prestressed webs take the general procedure of LRFD 5.7.3.4.2 (the
+    // simplified one ignores the prestress); reinforced concrete keeps the
+    // simplified procedure of 5.7.3.4.1, which is written for it.
+    capacity::CapacityOptions capacity_options;
+    if (bridge.materials.kind == model::MaterialKind::prestressed_concrete)
+      capacity_options.shear_method = capacity::ConcreteShearMethod::general;
+    const capacity::GirderCapacity capacity(bridge, girder, capacity_options);
     const bool lrfr = bridge.rating.method == model::RatingMethod::lrfr;
     distribution::GirderLineFactors factors;
     std::optional<distribution::LfrGirderFactors> lfr_factors;
@@ -164,6 +170,7 @@ BridgeRating rate_bridge(const model::Bridge& bridge, const model::Policy& polic
 
     rating::GirderRatingInputs in;
     in.method = bridge.rating.method;
+    in.material = bridge.materials.kind;
     in.analysis = &analysis;
     in.capacity = &capacity;
     in.policy = &policy;

@@ -219,6 +219,7 @@ GirderRating rate_girder_line(const GirderRatingInputs& in) {
 
       for (std::size_t i = 0; i < points.size(); ++i) {
         const PointCapacity& cap = capacities[i];
+        const Real station = points[i].station;
         const GirderDistribution& g = in.distribution;
         const DeadAt dm = dead_moment(a, i);
         {
@@ -236,15 +237,34 @@ GirderRating rate_girder_line(const GirderRatingInputs& in) {
                g.moment_negative[i], im);
         }
         const Real im = in.impact.shear[i];
+        // Concrete webs (LRFD 5.7.3.4.2) need the factored demand at the
+        // section: Vu from this vehicle at this level and, conservatively for
+        // the longitudinal strain, the factored moment with the largest live
+        // moment at the point (the concurrent moment is not tracked).
+        const bool concrete = !lfr && (in.material == model::MaterialKind::reinforced_concrete ||
+                                       in.material == model::MaterialKind::prestressed_concrete);
+        const GoverningLive live_moment =
+            governing_live(*rated.envelope, EffectKind::moment, i, Extreme::maximum, g.moment_positive[i],
+                           in.impact.positive_moment[i], in.impact.applies_to_lane);
+        const Real mu = gamma_dc * dm.dc + gamma_dw * dm.dw + gamma_ll * live_moment.value;
         for (int s = 0; s < 2; ++s) {
           const bool left = s == 0;
           const EffectKind kind = left ? EffectKind::shear_left : EffectKind::shear_right;
           const DeadAt dv = dead_shear(a, i, left);
           for (Extreme e : live_load::kExtremes) {
             const Real sign = live_load::sign_of(e);
-            rate(i, RatedEffect::shear, left ? "left" : "right", cap.shear[s], in.shear_factors,
-                 DeadAt{sign * dv.dc, sign * dv.dw},
-                 governing_live(*rated.envelope, kind, i, e, g.shear[i], im, in.impact.applies_to_lane), g.shear[i],
+            const GoverningLive live =
+                governing_live(*rated.envelope, kind, i, e, g.shear[i], im, in.impact.applies_to_lane);
+            const DeadAt dead{sign * dv.dc, sign * dv.dw};
+            const capacity::Resistance* resistance = &cap.shear[s];
+            capacity::Resistance with_demand;
+            if (concrete && live.any && cap.shear[s].status != capacity::ResistanceStatus::given) {
+              const Real vu = std::abs(gamma_dc * dead.dc + gamma_dw * dead.dw + gamma_ll * live.value);
+              with_demand = in.capacity->shear(station, left ? section::Side::left : section::Side::right,
+                                               capacity::ShearDemand{mu, vu, 0.0});
+              if (with_demand.available()) resistance = &with_demand;
+            }
+            rate(i, RatedEffect::shear, left ? "left" : "right", *resistance, in.shear_factors, dead, live, g.shear[i],
                  im);
           }
         }

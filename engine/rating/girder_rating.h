@@ -72,6 +72,7 @@ struct RatedLoadModel {
 
 struct GirderRatingInputs {
   model::RatingMethod method = model::RatingMethod::lrfr;
+  model::MaterialKind material = model::MaterialKind::rolled_steel;  // concrete shear takes the demand
   const analysis::GirderLineAnalysis* analysis = nullptr;
   const capacity::GirderCapacity* capacity = nullptr;
   const model::Policy* policy = nullptr;
