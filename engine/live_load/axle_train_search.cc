@@ -121,6 +121,9 @@ ExtremePair<TrainExtreme> AxleTrainSearch::search(const EffectCurve& curve, Axle
   ExtremePair<Best> best;
   scratch.memo.resize(sweeps_.size());
   scratch.kept.resize(sweeps_.size());
+  scratch.cluster.resize(sweeps_.size());
+  for (SweepScratch& c : scratch.cluster) c.bounds_sweep = nullptr;
+  scratch.sweep.bounds_sweep = nullptr;
   Real weight_sum = 0.0;
   for (Real w : chain_.weights) weight_sum += std::abs(w);
   const Real margin = kPruneTolerance * weight_sum * curve.scale();
@@ -148,31 +151,35 @@ ExtremePair<TrainExtreme> AxleTrainSearch::search(const EffectCurve& curve, Axle
     }
   }
 
-  // 2. Clusters of the other patterns: one sweep each, keeping the
-  // candidates that could matter. A cluster adds at most its weight times
-  // the curve's peak ordinate of that sign.
-  auto peak_bound = [&](std::size_t sweep, Extreme x) {
-    return sweeps_[sweep]->weight_sum() * sign_of(x) * curve.peak(x).value;
-  };
+  // 2. Clusters of the other patterns: first each cluster's own extremes
+  // (best bound first, cheap), then one more pass keeping the candidates that
+  // could still lift a total above the best value given the other clusters'
+  // own bests.
+  for (std::size_t s : cluster_sweeps_) scratch.memo[s] = sweeps_[s]->extremes(curve, rule, scratch.cluster[s]);
   for (std::size_t s : cluster_sweeps_) {
     SweepKeep keep;
+    bool any = false;
     for (Extreme x : kExtremes) {
       if (!wanted[x]) continue;
       Real floor = std::numeric_limits<Real>::infinity();
       for (const Pattern& pattern : patterns_) {
         if (pattern.clusters.size() == 1) continue;
-        Real others = 0.0;
-        for (const Cluster& c : pattern.clusters) others += peak_bound(c.sweep, x);
+        Real sum_own = 0.0;
+        for (const Cluster& c : pattern.clusters) sum_own += own(c.sweep, x);
+        // Even every cluster at its own best cannot beat what is known.
+        if (sum_own <= best[x].value + margin) continue;
         for (const Cluster& c : pattern.clusters) {
-          if (c.sweep == s) floor = std::min(floor, best[x].value - (others - peak_bound(s, x)));
+          if (c.sweep == s) floor = std::min(floor, best[x].value - (sum_own - own(s, x)) - margin);
         }
       }
       const std::size_t e = x == Extreme::maximum ? 0 : 1;
       scratch.kept[s][e].clear();
+      if (floor == std::numeric_limits<Real>::infinity()) continue;
       keep.list[e] = &scratch.kept[s][e];
       keep.floor[e] = floor;
+      any = true;
     }
-    scratch.memo[s] = sweeps_[s]->candidates(curve, rule, keep, scratch.sweep);
+    if (any) (void)sweeps_[s]->candidates(curve, rule, keep, scratch.cluster[s]);
   }
 
   // 3. The patterns with free links: cut each cluster's kept candidates to

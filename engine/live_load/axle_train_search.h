@@ -66,6 +66,10 @@ struct TrainExtreme {
 // Scratch space for searches; reuse one per thread across calls.
 struct TrainSearchScratch {
   SweepScratch sweep;
+  // One per sweep of a free-link pattern's clusters, so that their block
+  // bounds survive from the first pass to the second (valid within one
+  // search call only).
+  std::vector<SweepScratch> cluster;
   // Per sweep: both extremes of the cluster alone, and the candidates kept
   // for each extreme.
   std::vector<SweepExtremes> memo;

@@ -94,19 +94,48 @@ EffectCurve::EffectCurve(analysis::PiecewiseCubic curve, analysis::ShearSide sid
     change_begin_[i + 1] = static_cast<std::uint32_t>(changes_.size());
   }
 
-  // Sparse tables for range extremes over runs of pieces.
-  level_.assign(pieces + 1, 0);
-  for (std::size_t c = 2; c <= pieces; ++c) level_[c] = static_cast<std::uint8_t>(level_[c / 2] + 1);
-  const std::size_t levels = static_cast<std::size_t>(level_[pieces]) + 1;
-  table_max_.assign(levels * pieces, 0.0);
-  table_min_.assign(levels * pieces, 0.0);
-  std::copy(piece_max_.begin(), piece_max_.end(), table_max_.begin());
-  std::copy(piece_min_.begin(), piece_min_.end(), table_min_.begin());
+  // Cell extremes (ends of each cell and the piece's stationary points inside
+  // it), then sparse tables for range extremes over runs of cells.
+  cell_count_ = pieces * kCells;
+  std::vector<Real> cell_max(cell_count_);
+  std::vector<Real> cell_min(cell_count_);
+  for (std::size_t i = 0; i < pieces; ++i) {
+    const detail::Cubic& c = curve_.coefficients()[i];
+    const Real h = lengths_[i];
+    Real stationary[2];
+    const int ns = detail::stationary_points_inside(c, h, stationary);
+    Real previous = detail::horner(c, 0.0);
+    for (std::size_t j = 0; j < kCells; ++j) {
+      const Real a = h * static_cast<Real>(j) / kCells;
+      const Real b = j + 1 == kCells ? h : h * static_cast<Real>(j + 1) / kCells;
+      const Real end = detail::horner(c, b);
+      Real hi = std::max(previous, end);
+      Real lo = std::min(previous, end);
+      for (int r = 0; r < ns; ++r) {
+        if (stationary[r] >= a && stationary[r] <= b) {
+          const Real v = detail::horner(c, stationary[r]);
+          hi = std::max(hi, v);
+          lo = std::min(lo, v);
+        }
+      }
+      cell_max[i * kCells + j] = hi;
+      cell_min[i * kCells + j] = lo;
+      previous = end;
+    }
+  }
+  level_.assign(cell_count_ + 1, 0);
+  for (std::size_t c = 2; c <= cell_count_; ++c) level_[c] = static_cast<std::uint8_t>(level_[c / 2] + 1);
+  const std::size_t levels = std::min(static_cast<std::size_t>(level_[cell_count_]) + 1, kCellLevels);
+  table_max_.assign(levels * cell_count_, 0.0);
+  table_min_.assign(levels * cell_count_, 0.0);
+  std::copy(cell_max.begin(), cell_max.end(), table_max_.begin());
+  std::copy(cell_min.begin(), cell_min.end(), table_min_.begin());
   for (std::size_t l = 1; l < levels; ++l) {
     const std::size_t half = std::size_t{1} << (l - 1);
-    for (std::size_t i = 0; i + (std::size_t{1} << l) <= pieces; ++i) {
-      table_max_[l * pieces + i] = std::max(table_max_[(l - 1) * pieces + i], table_max_[(l - 1) * pieces + i + half]);
-      table_min_[l * pieces + i] = std::min(table_min_[(l - 1) * pieces + i], table_min_[(l - 1) * pieces + i + half]);
+    const std::size_t n = cell_count_;
+    for (std::size_t i = 0; i + (std::size_t{1} << l) <= n; ++i) {
+      table_max_[l * n + i] = std::max(table_max_[(l - 1) * n + i], table_max_[(l - 1) * n + i + half]);
+      table_min_[l * n + i] = std::min(table_min_[(l - 1) * n + i], table_min_[(l - 1) * n + i + half]);
     }
   }
 
@@ -201,6 +230,16 @@ EffectCurve::EffectCurve(analysis::PiecewiseCubic curve, analysis::ShearSide sid
       root_negative_jumps_.push_back(rising ? off : on);
     }
   }
+}
+
+std::pair<std::uint32_t, std::uint32_t> EffectCurve::cell_range_slots(std::size_t first, std::size_t last,
+                                                                      std::size_t cell_count) {
+  // floor(log2(count)) without the table (this runs once per sweep layout).
+  assert(last >= first && last - first + 1 <= kLongestCellRange);
+  std::size_t level = 0;
+  while ((std::size_t{2} << level) <= last - first + 1 && level + 1 < kCellLevels) ++level;
+  return {static_cast<std::uint32_t>(level * cell_count + first),
+          static_cast<std::uint32_t>(level * cell_count + last + 1 - (std::size_t{1} << level))};
 }
 
 Real EffectCurve::ordinate(Real x, Approach approach) const {

@@ -19,6 +19,7 @@
 #include <cstddef>
 #include <cstdint>
 #include <string_view>
+#include <utility>
 #include <vector>
 
 #include "engine/analysis/influence_lines.h"
@@ -70,18 +71,31 @@ class EffectCurve {
   // one-sided limits at its ends included).
   [[nodiscard]] Real piece_max(std::size_t piece) const { return piece_max_[piece]; }
   [[nodiscard]] Real piece_min(std::size_t piece) const { return piece_min_[piece]; }
-  // The same over the pieces first..last (inclusive), in O(1) (a sparse
-  // table of the piece ranges).
-  [[nodiscard]] Real range_max(std::size_t first, std::size_t last) const {
-    const std::size_t level = level_[last - first + 1];
-    const std::size_t n = piece_max_.size();
+  // Each piece is cut into kCells equal cells for bounding moving loads
+  // tightly; cell c of piece k is index k * kCells + c.
+  static constexpr std::size_t kCells = 4;
+  // Ranges of up to 2 x 2^(kCellLevels - 1) cells are answered in O(1).
+  static constexpr std::size_t kCellLevels = 6;
+  static constexpr std::size_t kLongestCellRange = std::size_t{1} << kCellLevels;
+  // Largest and smallest value over the cells first..last (inclusive), in
+  // O(1) (a sparse table over the cells). Precondition: at most
+  // kLongestCellRange cells.
+  [[nodiscard]] Real cell_range_max(std::size_t first, std::size_t last) const {
+    const std::size_t level = std::min<std::size_t>(level_[last - first + 1], kCellLevels - 1);
+    const std::size_t n = cell_count_;
     return std::max(table_max_[level * n + first], table_max_[level * n + last + 1 - (std::size_t{1} << level)]);
   }
-  [[nodiscard]] Real range_min(std::size_t first, std::size_t last) const {
-    const std::size_t level = level_[last - first + 1];
-    const std::size_t n = piece_min_.size();
+  [[nodiscard]] Real cell_range_min(std::size_t first, std::size_t last) const {
+    const std::size_t level = std::min<std::size_t>(level_[last - first + 1], kCellLevels - 1);
+    const std::size_t n = cell_count_;
     return std::min(table_min_[level * n + first], table_min_[level * n + last + 1 - (std::size_t{1} << level)]);
   }
+  // The two table slots whose extremes make up cells first..last: the same
+  // for every curve on the same knots, so callers may compute them once.
+  [[nodiscard]] static std::pair<std::uint32_t, std::uint32_t> cell_range_slots(std::size_t first, std::size_t last,
+                                                                                std::size_t cell_count);
+  [[nodiscard]] const Real* cell_table_max() const { return table_max_.data(); }
+  [[nodiscard]] const Real* cell_table_min() const { return table_min_.data(); }
   // Sign changes strictly inside a piece, as local coordinates t from the
   // piece start (m), ascending.
   [[nodiscard]] const Real* sign_changes(std::size_t piece) const { return &changes_[change_begin_[piece]]; }
@@ -141,9 +155,10 @@ class EffectCurve {
   std::vector<Real> lengths_;
   std::vector<Real> piece_max_;
   std::vector<Real> piece_min_;
-  std::vector<Real> table_max_;  // level-major: level l holds the extremes of 2^l pieces from each start
+  std::size_t cell_count_ = 0;
+  std::vector<Real> table_max_;  // level-major: level l holds the extremes of 2^l cells from each start
   std::vector<Real> table_min_;
-  std::vector<std::uint8_t> level_;  // floor(log2(count)) for count = 0..pieces
+  std::vector<std::uint8_t> level_;  // floor(log2(count)) for count = 0..cells
   std::vector<std::uint32_t> change_begin_;
   std::vector<Real> changes_;
   Real positive_area_ = 0;

@@ -141,35 +141,63 @@ TrainSweep::TrainSweep(AxleGroup group, const std::vector<Real>& knots) : group_
         r.first = r.start >= 0 ? r.start : 0;
         r.last = p1 <= back + kStationTolerance ? std::max(left_of(p1), std::int32_t{0}) : pieces - 1;
         r.partly_off = p0 < front + kStationTolerance || p1 > back - kStationTolerance;
+        // The cells holding p0 (from the right) and p1 (from the left).
+        constexpr auto cells = static_cast<Real>(EffectCurve::kCells);
+        const auto cell_of = [&](std::int32_t k, Real x, bool from_right) {
+          const auto piece = static_cast<std::size_t>(k);
+          const Real f = (x - knots_[piece]) / (knots_[piece + 1] - knots_[piece]) * cells;
+          const Real c = from_right ? std::floor(f + 1e-9) : std::ceil(f - 1e-9) - 1.0;
+          const auto cell = static_cast<std::int32_t>(std::clamp(c, 0.0, cells - 1.0));
+          return k * static_cast<std::int32_t>(EffectCurve::kCells) + cell;
+        };
+        r.first_cell = r.start >= 0 ? cell_of(r.first, p0, true) : 0;
+        r.last_cell = p1 <= back + kStationTolerance ? cell_of(r.last, p1, false)
+                                                     : pieces * static_cast<std::int32_t>(EffectCurve::kCells) - 1;
+        r.last_cell = std::max(r.last_cell, r.first_cell);
       }
       reach_.push_back(r);
+      BoundTerm t;
+      if (r.first >= 0) {
+        t.weight = group_.weights[i];
+        const auto [a_slot, b_slot] =
+            EffectCurve::cell_range_slots(static_cast<std::size_t>(r.first_cell), static_cast<std::size_t>(r.last_cell),
+                                          static_cast<std::size_t>(pieces) * EffectCurve::kCells);
+        t.slot_a = a_slot;
+        t.slot_b = b_slot;
+        t.partly_off = r.partly_off;
+      }
+      terms_.push_back(t);
     }
   }
 }
 
 void TrainSweep::bound_blocks(const EffectCurve& curve, AxleRule rule, SweepScratch& scratch) const {
+  if (scratch.bounds_sweep == this && scratch.bounds_curve == &curve && scratch.bounds_rule == static_cast<int>(rule)) {
+    return;
+  }
+  scratch.bounds_sweep = this;
+  scratch.bounds_curve = &curve;
+  scratch.bounds_rule = static_cast<int>(rule);
   const std::size_t blocks = block_count();
   const std::size_t n = axle_count();
   scratch.upper.resize(blocks);
   scratch.lower.resize(blocks);
-  const bool clip = rule == AxleRule::drop_relieving;
+  const Real* table_max = curve.cell_table_max();
+  const Real* table_min = curve.cell_table_min();
+  // An axle that is off the girder for part of the block, or whose ordinate
+  // is clipped at zero, may contribute zero: the bound then includes zero.
+  constexpr Real kNone = std::numeric_limits<Real>::infinity();
+  const Real clip = rule == AxleRule::drop_relieving ? 0.0 : kNone;
+  const BoundTerm* term = terms_.data();
   for (std::size_t j = 0; j < blocks; ++j) {
     Real up = 0.0;
     Real lo = 0.0;
-    const Reach* reach = &reach_[j * n];
-    for (std::size_t i = 0; i < n; ++i) {
-      const Reach& r = reach[i];
-      if (r.first < 0) continue;
-      const auto first = static_cast<std::size_t>(r.first);
-      const auto last = static_cast<std::size_t>(r.last);
-      Real hi = curve.range_max(first, last);
-      Real low = curve.range_min(first, last);
-      if (clip || r.partly_off) {
-        hi = std::max(hi, 0.0);
-        low = std::min(low, 0.0);
-      }
-      up += group_.weights[i] * hi;
-      lo += group_.weights[i] * low;
+    for (std::size_t i = 0; i < n; ++i, ++term) {
+      const Real zero = term->partly_off ? 0.0 : clip;
+      const Real hi = std::max(std::max(table_max[term->slot_a], table_max[term->slot_b]), -zero);
+      const Real low = std::min(std::min(table_min[term->slot_a], table_min[term->slot_b]), zero);
+      up += term->weight * hi;
+      lo += term->weight * low;
     }
     scratch.upper[j] = up;
     scratch.lower[j] = lo;

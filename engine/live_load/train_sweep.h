@@ -82,6 +82,11 @@ struct SweepScratch {
   std::vector<Real> lower;  // per block
   std::vector<std::uint8_t> done;
   std::vector<std::uint32_t> order;
+  // What upper/lower were last computed for, so a second pass over the same
+  // sweep and curve reuses them.
+  const void* bounds_sweep = nullptr;
+  const EffectCurve* bounds_curve = nullptr;
+  int bounds_rule = -1;
 };
 
 // What to keep from a sweep besides the extremes: for each extreme (index 0
@@ -96,8 +101,10 @@ struct SweepKeep {
 
 class TrainSweep {
  public:
-  // Breakpoints per block of the pruning bound.
+  // Breakpoints per block of the pruning bound. An axle crosses at most this
+  // many knots in a block, so it touches at most kBlockBreaks + 1 pieces.
   static constexpr std::size_t kBlockBreaks = 12;
+  static_assert((kBlockBreaks + 1) * EffectCurve::kCells <= EffectCurve::kLongestCellRange);
 
   // Precondition: weights and offsets of equal, non-zero size; knots strictly
   // increasing, at least two.
@@ -133,12 +140,24 @@ class TrainSweep {
     Real weight;
     std::uint32_t knot;
   };
-  // The pieces axle i touches over block j, and the one it stands on at the
-  // block's first breakpoint (just right of it); -1 where it is off.
+  // The pieces axle i touches over block j, the one it stands on at the
+  // block's first breakpoint (just right of it), and the bounding cells it
+  // touches (EffectCurve::kCells per piece); -1 where it is off.
   struct Reach {
     std::int32_t first = -1;
     std::int32_t last = -1;
     std::int32_t start = -1;
+    std::int32_t first_cell = -1;
+    std::int32_t last_cell = -1;
+    bool partly_off = false;
+  };
+  // What the bound needs per block and axle, precomputed: the axle's weight
+  // (0 when it is off the girder throughout the block), the two cell-table
+  // slots, and whether it leaves or enters the girder in the block.
+  struct BoundTerm {
+    Real weight = 0;
+    std::uint32_t slot_a = 0;
+    std::uint32_t slot_b = 0;
     bool partly_off = false;
   };
 
@@ -156,6 +175,7 @@ class TrainSweep {
   std::vector<Crossing> crossings_;
   std::vector<std::uint32_t> block_first_;  // first breakpoint of each block; it ends at the next one's
   std::vector<Reach> reach_;                // block-major, axle_count() per block
+  std::vector<BoundTerm> terms_;            // parallel to reach_
   Real weight_sum_ = 0;
 };
 
