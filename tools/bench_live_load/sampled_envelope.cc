@@ -134,9 +134,11 @@ SampledEnvelope sampled_envelope(const PreparedInfluenceLines& lines, const mode
   SampledEnvelope out;
   for (std::size_t c = 0; c < model.cases.size(); ++c) {
     const CaseEnvelope& ce = analytic.cases[c];
-    SampledCaseValues values(lines.point_count(), lines.support_count());
+    SampledCaseValues values{EffectTable<Real>(lines.point_count(), lines.support_count()),
+                             EffectTable<Real>(lines.point_count(), lines.support_count())};
     for (EffectKind kind : kEffectKinds) {
-      for (auto& pair : values.of(kind)) pair.maximum = pair.minimum = kNaN;
+      for (auto& pair : values.train.of(kind)) pair.maximum = pair.minimum = kNaN;
+      for (auto& pair : values.lane.of(kind)) pair.maximum = pair.minimum = kNaN;
     }
     Real chain_length = 0.0;
     if (ce.chain) {
@@ -167,9 +169,9 @@ SampledEnvelope sampled_envelope(const PreparedInfluenceLines& lines, const mode
         if (ce.chain) train = train_extremes(grid, *ce.chain, ce.axle_rule == AxleRule::drop_relieving);
         for (Extreme x : kExtremes) {
           if (!applies[x]) continue;
-          Real v = x == Extreme::maximum ? train[0] : -train[1];
-          if (ce.lane) v += lane_value(grid, lines, kind, x, *ce.lane, ce.lane_concentrated);
-          values.of(kind)[index][x] = v;
+          values.train.of(kind)[index][x] = x == Extreme::maximum ? train[0] : -train[1];
+          values.lane.of(kind)[index][x] =
+              ce.lane ? lane_value(grid, lines, kind, x, *ce.lane, ce.lane_concentrated) : 0.0;
         }
       }
     }

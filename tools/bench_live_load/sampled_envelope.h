@@ -16,9 +16,12 @@
 
 namespace tenthpoint::bench {
 
-// Static per-lane totals (train + lane) of every case and effect, parallel to
+// Static per-lane train and lane parts of every case and effect, parallel to
 // MovingLoadEnvelope::cases[c].values; NaN where the case does not apply.
-using SampledCaseValues = live_load::EffectTable<Real>;
+struct SampledCaseValues {
+  live_load::EffectTable<Real> train;
+  live_load::EffectTable<Real> lane;
+};
 
 struct SampledEnvelope {
   std::vector<SampledCaseValues> cases;
