@@ -95,6 +95,40 @@ TEST_CASE("HL-93 on simple spans from 40 to 200 ft matches the resultant-rule cl
   }
 }
 
+TEST_CASE("HL-93 on short simple spans from 20 to 30 ft matches the tandem, lane and two-axle closed forms",
+          "[live_load][envelope]") {
+  // REFERENCE.md section 7 closed forms valid on short spans: tandem M = 50
+  // (L/2 - 1)^2 / L, V = 50 - 100/L; lane M = 0.08 L^2, V = 0.32 L; truck end
+  // shear 72 - 672/L (all three axles on the span, L >= 28 ft). Below 32.7 ft
+  // the front axle cannot join the 32 kip pair: by the resultant rule the pair
+  // gives M = 64 (L/2 - 3.5)^2 / L under one axle at L/2 - 3.5 (both on the
+  // span for L >= 21 ft; statics).
+  for (Real L : {20.0, 24.0, 28.0, 30.0}) {
+    INFO("span " << L << " ft");
+    const Girder g = prismatic_girder({L}, {L / 2 - 1.0, L / 2 - 3.5});
+    const MovingLoadEnvelope e = hl93_on(g);
+    const std::size_t tandem_point = point_at(*g.prepared, ft(L / 2 - 1.0));
+    const std::size_t mid = point_at(*g.prepared, ft(L / 2));
+    TP_CHECK_CLOSE(
+        to_kip_ft(value_of(e, "tandem-and-lane", {EffectKind::moment, tandem_point, Extreme::maximum}).train_value()),
+        50 * std::pow(L / 2 - 1, 2) / L, kExact, 1.0);
+    TP_CHECK_CLOSE(to_kip_ft(value_of(e, "tandem-and-lane", {EffectKind::moment, mid, Extreme::maximum}).lane_value()),
+                   0.08 * L * L, kExact, 1.0);
+    const EffectKey end_shear{EffectKind::shear_right, 0, Extreme::maximum};
+    TP_CHECK_CLOSE(to_kip(value_of(e, "tandem-and-lane", end_shear).train_value()), 50 - 100 / L, kExact, 1.0);
+    TP_CHECK_CLOSE(to_kip(value_of(e, "tandem-and-lane", end_shear).lane_value()), 0.32 * L, kExact, 1.0);
+    if (L >= 28.0) {
+      TP_CHECK_CLOSE(to_kip(value_of(e, "truck-and-lane", end_shear).train_value()), 72 - 672 / L, kExact, 1.0);
+    }
+    if (L >= 21.0 && L < 32.0) {
+      const std::size_t pair_point = point_at(*g.prepared, ft(L / 2 - 3.5));
+      TP_CHECK_CLOSE(
+          to_kip_ft(value_of(e, "truck-and-lane", {EffectKind::moment, pair_point, Extreme::maximum}).train_value()),
+          64 * std::pow(L / 2 - 3.5, 2) / L, kExact, 1.0);
+    }
+  }
+}
+
 TEST_CASE("HS20 per-lane moment and shear at 100 ft agree with the Standard Specifications Appendix A",
           "[live_load][envelope]") {
   // AASHTO Standard Specifications 17th ed., Appendix A (maximum moments and
