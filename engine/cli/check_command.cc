@@ -9,6 +9,8 @@
 #include <fmt/format.h>
 #include <nlohmann/json.hpp>
 
+#include "engine/core/csv_field.h"
+
 #include "engine/cli/command.h"
 #include "engine/cli/console.h"
 #include "engine/core/atomic_file.h"
@@ -21,13 +23,6 @@ namespace {
 nlohmann::json to_json(const Diagnostic& d) {
   return {{"severity", to_string(d.severity)}, {"file", d.where.file}, {"line", d.where.line},
           {"column", d.where.column},          {"field", d.field},     {"message", d.message}};
-}
-
-std::string csv_field(const std::string& text) {
-  if (text.find_first_of(",\"\n") == std::string::npos) return text;
-  std::string out = "\"";
-  for (char c : text) out += c == '"' ? std::string("\"\"") : std::string(1, c);
-  return out + "\"";
 }
 
 // One row per valid bridge: what an engineer scans to see the inventory.

@@ -54,14 +54,14 @@ rating::GirderDistribution distribution_at_points(const distribution::GirderLine
     const int span = static_cast<int>(p.span);
     const distribution::DistributionFactor* pos = f.find(FactorRegion::positive_moment, span);
     const distribution::DistributionFactor* shear = f.find(FactorRegion::shear, span);
-    const int near_support = p.span_fraction < 0.5 ? span : span + 1;
+    // Interior supports are numbered 1 .. span_count - 1; try the nearer
+    // end of the point's span first, then the farther one.
+    const int nearer = p.span_fraction < 0.5 ? span : span + 1;
+    const int farther = p.span_fraction < 0.5 ? span + 1 : span;
+    const auto interior = [&](int support) { return support > 0 && support < static_cast<int>(span_count); };
     const distribution::DistributionFactor* neg = nullptr;
-    if (near_support > 0 && static_cast<std::size_t>(near_support) < span_count + 0)
-      neg = f.find(FactorRegion::negative_moment, near_support);
-    if (neg == nullptr) {
-      const int other = p.span_fraction < 0.5 ? span + 1 : span;
-      if (other > 0 && static_cast<std::size_t>(other) < span_count) neg = f.find(FactorRegion::negative_moment, other);
-    }
+    if (interior(nearer)) neg = f.find(FactorRegion::negative_moment, nearer);
+    if (neg == nullptr && interior(farther)) neg = f.find(FactorRegion::negative_moment, farther);
     d.moment_positive.push_back(pos ? pos->value : 0.0);
     d.shear.push_back(shear ? shear->value : 0.0);
     d.moment_negative.push_back(neg ? neg->value : (pos ? pos->value : 0.0));

@@ -7,6 +7,8 @@
 #include <fmt/format.h>
 #include <nlohmann/json.hpp>
 
+#include "engine/core/csv_field.h"
+
 #include "engine/analysis/result_table.h"
 
 namespace tenthpoint::report {
@@ -50,13 +52,6 @@ Real largest(const std::vector<Real>& values) {
   Real m = 0;
   for (Real v : values) m = std::max(m, std::abs(v));
   return m;
-}
-
-std::string csv_field(const std::string& text) {
-  if (text.find_first_of(",\"\n") == std::string::npos) return text;
-  std::string out = "\"";
-  for (char c : text) out += c == '"' ? std::string("\"\"") : std::string(1, c);
-  return out + "\"";
 }
 
 }  // namespace
