@@ -9,17 +9,36 @@
 // dimensionless. Dates are ISO 8601 (YYYY-MM-DD) strings.
 #pragma once
 
+#include <cstdint>
 #include <optional>
 #include <string>
+#include <string_view>
 #include <vector>
 
+#include "engine/core/name_table.h"
+
 namespace tenthpoint::ledger {
+
+// A run's number in its ledger: 1, 2, ... in the order runs were begun (a
+// merge renumbers the shards' runs in the order they started).
+using RunId = std::int64_t;
 
 enum class BridgeStatus {
   rated,      // rated in this run
   unchanged,  // inputs hash equal to its last rating: carried forward, not recomputed
   failed,     // could not be read or rated; `reason` says why
 };
+
+inline constexpr NameTable<BridgeStatus, 3> kBridgeStatusNames{{
+    {BridgeStatus::rated, "rated"},
+    {BridgeStatus::unchanged, "unchanged"},
+    {BridgeStatus::failed, "failed"},
+}};
+// The ledger's (and the summary files') spelling of a status.
+[[nodiscard]] constexpr std::string_view to_string(BridgeStatus s) { return name_of(kBridgeStatusNames, s); }
+[[nodiscard]] constexpr std::optional<BridgeStatus> parse_bridge_status(std::string_view text) {
+  return value_of(kBridgeStatusNames, text);
+}
 
 // The governing rating of one load model at one level over the girder lines.
 struct GoverningRow {
@@ -41,7 +60,7 @@ struct GoverningRow {
 struct PostingRow {
   std::string load_model_id;
   double rating_factor = 0;
-  std::string status;                  // none, post, close
+  std::string status;                   // none, post, close
   std::optional<double> posted_weight;  // in weight_unit, when status == "post"
   std::string reason;
 };
@@ -70,6 +89,10 @@ struct BridgeRecord {
   std::optional<std::string> rerate_by;
   std::optional<std::string> post_by;
   int warning_count = 0;
+
+  // For an unchanged record: the run whose rating it carries (set by
+  // Ledger::carry_forward; none for rated and failed records).
+  std::optional<RunId> carried_from;
 };
 
 }  // namespace tenthpoint::ledger

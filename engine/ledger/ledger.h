@@ -20,10 +20,13 @@
 #include <vector>
 
 #include "engine/ledger/bridge_record.h"
+#include "engine/ledger/change_report.h"
+#include "engine/ledger/ledger_error.h"
 
 namespace tenthpoint::ledger {
 
-using RunId = std::int64_t;
+// RunId is declared in bridge_record.h; RatingChange and ChangeReport in
+// change_report.h.
 
 struct RunInfo {
   RunId id = 0;
@@ -46,24 +49,6 @@ struct HistoryEntry {
   BridgeRecord record;  // the governing rows and postings as of that run
 };
 
-struct RatingChange {
-  std::string structure_id;
-  std::string load_model_id;
-  std::string level;
-  std::optional<double> before;  // none: not rated in the earlier run
-  std::optional<double> after;   // none: not rated in the later run
-};
-
-struct ChangeReport {
-  RunId from = 0;
-  RunId to = 0;
-  double threshold = 0;                   // |after - before| that counts as a move
-  std::vector<RatingChange> moved;        // rating factors that moved beyond the threshold
-  std::vector<std::string> newly_posted;  // structure ids whose recommendation became post
-  std::vector<std::string> newly_closed;  // ... became close
-  std::vector<BridgeRecord> overdue;      // rerate_by or post_by before the later run's date
-};
-
 class Ledger {
  public:
   // Opens (creating and migrating as needed) the ledger at `path`. Throws
@@ -75,12 +60,22 @@ class Ledger {
   Ledger& operator=(Ledger&&) noexcept;
   ~Ledger();
 
+  // Records a new run; `info.started` defaults to now (UTC) when empty. The
+  // id, finish time and counts of `info` are ignored.
   [[nodiscard]] RunId begin_run(const RunInfo& info);
-  // Stores one bridge of a run in one transaction.
+  // Stores one bridge of a run in one transaction. A record of the same
+  // bridge already in the run (same non-empty structure id; for an empty id,
+  // the same file) is replaced. Throws LedgerError, storing nothing, when the
+  // run does not exist or a number is NaN or infinite (naming the bridge and
+  // the field).
   void record_bridge(RunId run, const BridgeRecord& record);
   // Carries the last result of each unchanged bridge (by structure id) into
-  // `run` with status unchanged, in one transaction.
+  // `run` with status unchanged, in one transaction: the copy keeps the
+  // governing rows, postings and dates of its source and sets carried_from to
+  // the run that computed them. Throws LedgerError, carrying none, when a
+  // bridge has no successful record in an earlier run.
   void carry_forward(RunId run, const std::vector<std::string>& structure_ids);
+  // Sets the finish time (now, UTC, when `finished` is empty) and the counts.
   void finish_run(RunId run, const RunInfo& counts_and_finish_time);
 
   // The inputs hash of a bridge file's latest successful rating (rated or
@@ -95,14 +90,21 @@ class Ledger {
   [[nodiscard]] std::vector<std::pair<std::string, LastInputs>> all_last_inputs() const;
 
   [[nodiscard]] std::optional<RunInfo> run(RunId id) const;
+  // The run begun last, finished or not.
   [[nodiscard]] std::optional<RunInfo> latest_run() const;
+  // The run begun last among those that finished (a killed run never does).
+  [[nodiscard]] std::optional<RunInfo> latest_finished_run() const;
   [[nodiscard]] std::vector<RunInfo> runs() const;
   // The state of every bridge in a run (rated, unchanged or failed).
   [[nodiscard]] std::vector<BridgeRecord> run_results(RunId run) const;
   // The latest record of one bridge before `run` (or overall), for "what changed".
+  // Any status: a failed record is returned as such.
   [[nodiscard]] std::optional<BridgeRecord> previous_record(const std::string& structure_id,
                                                             std::optional<RunId> before_run) const;
+  // Every run that has a record of the bridge, oldest (lowest run id) first.
   [[nodiscard]] std::vector<HistoryEntry> history(const std::string& structure_id) const;
+  // compare_records() over the two runs' records, as of the date `to` started.
+  // Throws LedgerError when either run does not exist.
   [[nodiscard]] ChangeReport changes(RunId from, RunId to, double threshold) const;
 
   // Copies every run and result of the shard ledgers into this one, in one
@@ -110,7 +112,14 @@ class Ledger {
   // ledger (shard cleared, counts summed, earliest start and latest finish);
   // other runs are copied as they are. Run ids are renumbered. Throws
   // LedgerError when two shards of a batch hold the same bridge.
+  // A batch already in this ledger (from an earlier merge) is joined, so
+  // merging the same shard twice is refused as a duplicate bridge. The merged
+  // run is finished only when every shard's run finished. Each shard must
+  // exist (it is opened, and migrated if older, never created).
   void merge(const std::vector<std::filesystem::path>& shards);
+
+  // The file this ledger was opened from.
+  [[nodiscard]] const std::filesystem::path& path() const;
 
   // PRAGMA integrity_check == "ok".
   [[nodiscard]] bool integrity_ok() const;
