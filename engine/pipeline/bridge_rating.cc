@@ -184,6 +184,7 @@ BridgeRating rate_bridge(const model::Bridge& bridge, const model::Policy& polic
     in.wearing_surface_field_measured = analysis.wearing_surface_field_measured;
     for (std::size_t m = 0; m < models.size(); ++m) in.load_models.push_back({models[m], &envelopes[m]});
     rating::GirderRating rated = rating::rate_girder_line(in);
+    out.details.push_back(girder_line_detail(analysis, envelopes, in.distribution, in.impact));
     rated.girder_count = girder.count;
     for (const std::string& w : factors.all_warnings()) out.warnings.push_back(fmt::format("{}: {}", girder.id, w));
     for (const std::string& w : rated.warnings) out.warnings.push_back(fmt::format("{}: {}", girder.id, w));

@@ -26,6 +26,7 @@
 #include "engine/distribution/distribution_factor.h"
 #include "engine/model/bridge.h"
 #include "engine/model/policy.h"
+#include "engine/pipeline/girder_line_detail.h"
 #include "engine/rating/deadlines.h"
 #include "engine/rating/girder_rating.h"
 #include "engine/rating/posting.h"
@@ -72,6 +73,9 @@ struct BridgeRating {
   std::string recommendation_reason;
   rating::RatingDeadlines deadlines;
   std::vector<std::string> warnings;
+  // Per girder line (same order as `girders`): points, dead loads and
+  // envelopes, for the results document (engine/report/results_document.h).
+  std::vector<GirderLineDetail> details;
 
   // The governing rating of a load model at a level; nullptr when not rated.
   [[nodiscard]] const GoverningRating* find(std::string_view load_model_id, model::RatingLevel level) const;
