@@ -54,6 +54,8 @@ struct GoverningRow {
   std::string effect;  // positive_moment, negative_moment, shear
   std::string limit_state;
   bool screened_out = false;
+
+  friend bool operator==(const GoverningRow&, const GoverningRow&) = default;
 };
 
 // The posting of one legal (or emergency) vehicle.
@@ -63,6 +65,8 @@ struct PostingRow {
   std::string status;                   // none, post, close
   std::optional<double> posted_weight;  // in weight_unit, when status == "post"
   std::string reason;
+
+  friend bool operator==(const PostingRow&, const PostingRow&) = default;
 };
 
 struct BridgeRecord {
@@ -93,6 +97,8 @@ struct BridgeRecord {
   // For an unchanged record: the run whose rating it carries (set by
   // Ledger::carry_forward; none for rated and failed records).
   std::optional<RunId> carried_from;
+
+  friend bool operator==(const BridgeRecord&, const BridgeRecord&) = default;
 };
 
 }  // namespace tenthpoint::ledger
