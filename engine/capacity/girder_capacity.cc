@@ -10,6 +10,8 @@
 #include "engine/capacity/concrete_flexure.h"
 #include "engine/capacity/concrete_section_builder.h"
 #include "engine/capacity/given_capacity_lookup.h"
+#include "engine/capacity/lfr_concrete_flexure.h"
+#include "engine/capacity/lfr_concrete_shear.h"
 #include "engine/capacity/stage_moduli.h"
 #include "engine/capacity/steel_composite_positive_flexure.h"
 #include "engine/capacity/steel_flange_flexure.h"
@@ -133,10 +135,22 @@ void GirderCapacity::finish(Resistance& r, const State& state) const {
     r.warnings.push_back(fmt::format("{}: section reduced for {} loss record(s) of the inspection of {}", state.label,
                                      state.deteriorated.applied.size(), inspection_->date.to_iso()));
   }
-  if (r.status == ResistanceStatus::computed && method_ == model::RatingMethod::lfr) {
-    r.warnings.push_back(
-        "resistances follow AASHTO LRFD; Load Factor Rating (Standard Specifications) capacities "
-        "are not implemented");
+  // Load Factor Rating: concrete flexure and RC shear follow the Standard
+  // Specifications (lfr_concrete_*.h). What still comes from AASHTO LRFD is
+  // said, case by case.
+  if (r.status == ResistanceStatus::computed && method_ == model::RatingMethod::lfr &&
+      r.article.rfind("AASHTO Standard Specifications", 0) != 0) {
+    if (model::is_steel(materials_.kind)) {
+      r.warnings.push_back(
+          "steel resistances follow AASHTO LRFD 6.10 (phi = 1.0, as load factor design); for a compact composite "
+          "section in positive flexure both it and Standard Specifications 10.50.1.1 give Mp, otherwise Standard "
+          "Specifications 10.48/10.50 (ductility reduction, lateral-torsional buckling, 10.48.8 shear) are not "
+          "implemented for Load Factor Rating");
+    } else {
+      r.warnings.push_back(
+          "prestressed concrete shear follows AASHTO LRFD 5.7.3; Standard Specifications 9.20 (Vci, Vcw) is not "
+          "implemented for Load Factor Rating");
+    }
   }
 }
 
@@ -224,7 +238,9 @@ Resistance GirderCapacity::flexure(Real station, MomentSign sign, section::Side 
                                                  source_file_)
                   : prestressed_sections(s.deteriorated.section, materials_, sign, options_.density_factor,
                                          source_file_);
-          ConcreteFlexure f = concrete_flexure(member.flexure, options_.resistance);
+          ConcreteFlexure f = method_ == model::RatingMethod::lfr
+                                  ? lfr_concrete_flexure(member.flexure)
+                                  : concrete_flexure(member.flexure, options_.resistance);
           for (const std::string& note : member.notes) f.resistance.trace.add_note(note);
           f.resistance.warnings.insert(f.resistance.warnings.end(), member.warnings.begin(), member.warnings.end());
           return f.resistance;
@@ -280,6 +296,19 @@ Resistance GirderCapacity::shear(Real station, section::Side side, const std::op
                                                  source_file_)
                   : prestressed_sections(s.deteriorated.section, materials_, sign, options_.density_factor,
                                          source_file_);
+          if (method_ == model::RatingMethod::lfr && std::is_same_v<T, model::ReinforcedConcreteBeam>) {
+            // Standard Specifications 8.16.6 with d from 8.16.3.
+            const ConcreteFlexure f = lfr_concrete_flexure(member.flexure);
+            if (!f.resistance.available()) {
+              return Resistance::unavailable_because(
+                  fmt::format("{}: d for Standard Specifications 8.16.6 needs the flexural calculation, which "
+                              "failed: {}",
+                              s.label, f.resistance.reason));
+            }
+            Resistance out = lfr_concrete_shear(member.shear, f.effective_depth);
+            out.trace.add_note(fmt::format("d from the {} moment flexural calculation", to_string(sign)));
+            return out;
+          }
           const ConcreteFlexure f = concrete_flexure(member.flexure, options_.resistance);
           if (!f.resistance.available()) {
             return Resistance::unavailable_because(

@@ -36,9 +36,11 @@
 // A stiffened web panel is an end panel (6.10.9.3.3) within one stiffener
 // spacing of a girder end.
 //
-// Computed results on a bridge rated by LFR carry a warning: these are AASHTO
-// LRFD resistances; Standard Specifications (LFR) capacities are not
-// implemented.
+// A bridge rated by LFR takes the AASHTO Standard Specifications 17th ed.
+// for concrete flexure (8.16.3 RC, 9.17 PS; lfr_concrete_flexure.h) and RC
+// shear (8.16.6; lfr_concrete_shear.h). Steel (LRFD 6.10 with phi = 1.0,
+// which gives Mp for compact composite positive flexure as 10.50.1.1 does)
+// and prestressed shear keep the LRFD resistance with a warning saying so.
 //
 // Units internal SI: stations m, moments N*m (magnitudes), shears N.
 // Throws InputError for invalid options, segments that do not resolve

@@ -241,8 +241,35 @@ TEST_CASE("bar loss lowers the slab strip's Mn to the hand value", "[capacity]")
   CHECK_THAT(negative.reason, Catch::StartsWith("sections[SLAB-STRIP] negative moment: no tension reinforcement"));
 }
 
-TEST_CASE("the general shear procedure through the girder takes the demand at the section", "[capacity]") {
+TEST_CASE("an RC slab rated by LFR takes the Standard Specifications strength and shear", "[capacity][lfr]") {
+  // EV-0031 (LFR): 12 in strip, d = 14.44 in, As = 2.18 in^2, f'c = 3 ksi,
+  // fy = 40 ksi, no stirrups. Standard Specifications 8-17/8-18 with phi =
+  // 0.90 (8.16.1.2.2) and 8-49, Vc = 2 sqrt(f'c) bw d (psi), phi = 0.85,
+  // worked by hand (equation numbers from memory).
   const model::Bridge b = load("ev-0031-pasture-lane.yaml");
+  REQUIRE(b.rating.method == model::RatingMethod::lfr);
+  const GirderCapacity capacity(b, girder(b, "STRIP"));
+  const Resistance m = capacity.flexure(ft(5), MomentSign::positive);
+  REQUIRE(m.status == ResistanceStatus::computed);
+  const double a = 2.18 * 40 / (0.85 * 3 * 12);
+  TP_CHECK_CLOSE(test::to_kip_in(m.nominal), 2.18 * 40 * (14.44 - a / 2), kHand, 1.0);
+  CHECK(m.phi == Approx(0.90));
+  CHECK(m.article == "AASHTO Standard Specifications 8.16.3.2");
+  const Resistance v = capacity.shear(ft(5));
+  REQUIRE(v.status == ResistanceStatus::computed);
+  const double vc = 2 * std::sqrt(3000.0) * 12 * 14.44 / 1000;  // kip
+  TP_CHECK_CLOSE(test::to_kip(v.nominal), vc, kHand, 1.0);
+  TP_CHECK_CLOSE(test::to_kip(v.factored), 0.85 * vc, kHand, 1.0);
+  // Standard Specifications values carry no "LRFD used for LFR" warning.
+  for (const std::string& w : m.warnings) CHECK_THAT(w, !Catch::Contains("Load Factor Rating"));
+  for (const std::string& w : v.warnings) CHECK_THAT(w, !Catch::Contains("Load Factor Rating"));
+}
+
+TEST_CASE("the general shear procedure through the girder takes the demand at the section", "[capacity]") {
+  // EV-0031 is rated by LFR, whose RC shear is Standard Specifications 8.16.6;
+  // rated by LRFR here so that the LRFD 5.7.3.4.2 procedure applies.
+  model::Bridge b = load("ev-0031-pasture-lane.yaml");
+  b.rating.method = model::RatingMethod::lrfr;
   CapacityOptions options;
   options.shear_method = ConcreteShearMethod::general;
   const GirderCapacity capacity(b, girder(b, "STRIP"), options);
