@@ -120,9 +120,9 @@ SnbiItems snbi_items(const ledger::BridgeRecord& r, const SnbiOptions& options) 
   const RecordHeadline h = record_headline(r);
   if (r.status != ledger::BridgeStatus::failed) {
     s.lr03 = snbi_date(r.rating_date);
-    // B.LR.04 load rating method: plain LRFR or LFR. Coding table per
-    // FHWA-HIF-22-017; verify against the agency's submittal.
-    s.lr04 = r.method == "lrfr" ? "LRFR" : (r.method == "lfr" ? "LFR" : r.method);
+    // B.LR.04 load rating method: the plain value (LRFR, LFR). Coding table
+    // per FHWA-HIF-22-017; verify against the agency's submittal.
+    s.lr04 = r.method;
     s.ps01 = r.recommendation;
   }
   if (h.inventory) s.lr05 = snbi_rating_factor(h.inventory->rating_factor);

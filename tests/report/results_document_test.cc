@@ -1,0 +1,194 @@
+// The per-bridge results document: it validates against
+// schemas/results.schema.json, its numbers are in the bridge's own units,
+// and its quantities round-trip to the rating they came from.
+#include "engine/report/results_document.h"
+
+#include <cmath>
+#include <limits>
+
+#include <catch2/catch.hpp>
+
+#include "engine/core/errors.h"
+#include "engine/report/finite_numbers.h"
+#include "tests/report/report_test_support.h"
+#include "tests/support/approx.h"
+
+using namespace tenthpoint;
+using nlohmann::json;
+
+namespace {
+
+report::ResultsContext context() { return {"0.1.0", "abc123", "inventory/x.yaml", 7, "2026-12-01T02:00:00Z"}; }
+
+const json& girder(const json& doc, const std::string& id) {
+  for (const json& g : doc["girders"])
+    if (g["girder_id"] == id) return g;
+  FAIL("no girder " << id);
+  return doc;
+}
+
+std::size_t point_at(const json& g, double span_fraction, std::size_t span = 1) {
+  for (const json& p : g["points"])
+    if (p["span"] == span && std::abs(p["span_fraction"].get<double>() - span_fraction) < 1e-9)
+      return p["index"].get<std::size_t>();
+  FAIL("no point at " << span_fraction);
+  return 0;
+}
+
+const json& live_model(const json& g, const std::string& id) {
+  for (const json& m : g["live_load"])
+    if (m["load_model_id"] == id) return m;
+  FAIL("no load model " << id);
+  return g;
+}
+
+}  // namespace
+
+TEST_CASE("every demo bridge's results document validates against its schema", "[report][results]") {
+  for (const char* name : {"ev-0207-quarry-hill.yaml", "ev-0112-willow-run.yaml", "ev-0042-grange-hall.yaml",
+                           "ev-0348-cedar-mill.yaml", "ev-0245-old-ferry.yaml"}) {
+    INFO(name);
+    const test::RatedDemo demo = test::rate_demo(name);
+    const json doc = report::results_document(demo.bridge, demo.rating, context());
+    CHECK(test::schema_violations(doc, "results.schema.json") == "");
+    CHECK_FALSE(report::first_non_finite(doc).has_value());
+    CHECK(doc["caution"] ==
+          "Results support, and never replace, the judgment of a licensed engineer; factors and vehicles follow the "
+          "configured policy; local codes govern.");
+    REQUIRE(doc["girders"].size() == demo.rating.girders.size());
+  }
+}
+
+TEST_CASE("the document's governing values are the rating's, in the bridge's units", "[report][results]") {
+  const test::RatedDemo demo = test::rate_demo("ev-0112-willow-run.yaml");  // US, two spans, LRFR
+  const json doc = report::results_document(demo.bridge, demo.rating, context());
+  CHECK(doc["units"]["length"] == "ft");
+  CHECK(doc["units"]["moment"] == "kip-ft");
+  CHECK(doc["units"]["weight"] == "ton");
+  CHECK(doc["run"]["id"] == 7);
+  CHECK(doc["bridge"]["inputs_hash"] == "abc123");
+  REQUIRE(doc["governing"].size() == demo.rating.governing.size());
+  for (std::size_t i = 0; i < demo.rating.governing.size(); ++i) {
+    const pipeline::GoverningRating& g = demo.rating.governing[i];
+    const json& d = doc["governing"][i];
+    INFO(g.load_model_id);
+    CHECK(d["load_model_id"] == g.load_model_id);
+    CHECK(d["rating_factor"].get<double>() == g.at.result.rating_factor);
+    // 1 ft = 0.3048 m exactly (NIST SP 811 B.8).
+    TP_CHECK_CLOSE(d["at"]["station"].get<double>() * 0.3048, g.at.station, 1e-12, 1.0);
+    // A short ton is 2 kip (2000 lbf); 1 lbf = 4.4482216152605 N (NIST SP 811 B.8).
+    if (g.rating_weight_rated)
+      TP_CHECK_CLOSE(d["rating"].get<double>() * 2000 * 4.4482216152605, *g.rating_weight_rated, 1e-12, 1.0);
+    // MBE 6A.4.2.1-1: RF = (C - factored permanent) / factored live, from the document's own numbers.
+    const json& at = d["at"];
+    TP_CHECK_CLOSE(
+        (at["capacity"].get<double>() - at["permanent_factored"].get<double>()) / at["live_factored"].get<double>(),
+        d["rating_factor"].get<double>(), 1e-9, 1.0);
+  }
+  CHECK(doc["recommendation"]["status"] == std::string(rating::to_string(demo.rating.recommendation)));
+}
+
+TEST_CASE("every rated point of the rating appears in the document", "[report][results]") {
+  const test::RatedDemo demo = test::rate_demo("ev-0112-willow-run.yaml");
+  const json doc = report::results_document(demo.bridge, demo.rating, context());
+  for (std::size_t gi = 0; gi < demo.rating.girders.size(); ++gi) {
+    const rating::GirderRating& g = demo.rating.girders[gi];
+    const json& ratings = doc["girders"][gi]["ratings"];
+    std::size_t k = 0;
+    for (const rating::LoadModelRating& m : g.load_models)
+      for (const rating::LevelRating& l : m.levels) {
+        const json& level = ratings[k++];
+        CHECK(level["load_model_id"] == m.load_model_id);
+        REQUIRE(level["points"].size() == l.points.size());
+        for (std::size_t p = 0; p < l.points.size(); ++p) {
+          const json& row = level["points"][p];
+          CHECK(row["point"] == l.points[p].point);
+          CHECK(row["effect"] == std::string(rating::to_string(l.points[p].effect)));
+          if (l.points[p].result.status == rating::RatingStatus::rated)
+            CHECK(row["rating_factor"].get<double>() == l.points[p].result.rating_factor);
+          else
+            CHECK(row["rating_factor"].is_null());
+        }
+      }
+  }
+}
+
+TEST_CASE("a simple span's envelopes and dead loads match the closed forms", "[report][results]") {
+  // EV-0207: one 100 ft simple span, US units, LRFR (inventory/ev-0207-quarry-hill.yaml).
+  const test::RatedDemo demo = test::rate_demo("ev-0207-quarry-hill.yaml");
+  const json doc = report::results_document(demo.bridge, demo.rating, context());
+  const json& g = girder(doc, "G-INT");
+  const std::size_t mid = point_at(g, 0.5);
+  const std::size_t end = point_at(g, 0.0);
+  const double L = 100.0;
+
+  // Statics of a simple span (closed form): w L^2 / 8 + P L / 4 at midspan
+  // and w L / 2 + P / 2 at the end, with the file's 1.65 kip/ft and 2.4 kip.
+  const json& dc1 = g["dead_load"][0];
+  REQUIRE(dc1["component"] == "DC1");
+  // Tolerance: the analysis solves the stiffness model in double precision.
+  TP_CHECK_CLOSE(dc1["moment"][mid].get<double>(), 1.65 * L * L / 8 + 2.4 * L / 4, 1e-9, 1.0);
+  TP_CHECK_CLOSE(dc1["shear_right"][end].get<double>(), 1.65 * L / 2 + 2.4 / 2, 1e-9, 1.0);
+
+  // HL-93 per lane, static (influence-line closed forms, REFERENCE.md section 7):
+  // design truck at midspan with the 32 kip axle at the apex and the 14 ft
+  // spacing: 18 L - 280 kip-ft; lane 0.64 L^2 / 8; end shear 72 - 672 / L and 0.32 L.
+  const json& hl93 = live_model(g, "HL93");
+  const json& m = hl93["moment"]["maximum"][mid];
+  TP_CHECK_CLOSE(m["train"].get<double>(), 18 * L - 280, 1e-9, 1.0);
+  TP_CHECK_CLOSE(m["lane"].get<double>(), 0.08 * L * L, 1e-9, 1.0);
+  TP_CHECK_CLOSE(m["combined"].get<double>(), 18 * L - 280 + 0.08 * L * L, 1e-9, 1.0);
+  REQUIRE(m["placement"].is_object());
+  // The variable rear spacing takes its 14 ft minimum at midspan (LRFD 3.6.1.2.2).
+  REQUIRE(m["placement"]["variable_links"].size() == 1);
+  TP_CHECK_CLOSE(m["placement"]["variable_links"][0]["value"].get<double>(), 14.0, 1e-9, 1.0);
+  CHECK(m["placement"]["variable_links"][0]["kind"] == "spacing");
+  const json& v = hl93["shear_right"]["maximum"][end];
+  TP_CHECK_CLOSE(v["train"].get<double>(), 72 - 672 / L, 1e-9, 1.0);
+  TP_CHECK_CLOSE(v["lane"].get<double>(), 0.32 * L, 1e-9, 1.0);
+
+  // Distributed: g [(1 + IM) train + lane] with the document's own g and IM (LRFD 3.6.2.1: no IM on the lane).
+  const double dist = g["distribution"]["at_points"]["positive_moment"][mid].get<double>();
+  const double im = g["impact"]["positive_moment"][mid].get<double>();
+  TP_CHECK_CLOSE(m["distributed"].get<double>(), dist * ((1 + im) * (18 * L - 280) + 0.08 * L * L), 1e-9, 1.0);
+  CHECK_FALSE(g["impact"]["applies_to_lane"].get<bool>());
+
+  // The positive-moment capacity at midspan is the one the rating used there.
+  const json& cap = g["capacities"][mid]["positive_moment"];
+  REQUIRE(cap.is_object());
+  CHECK_FALSE(cap["article"].get<std::string>().empty());
+}
+
+TEST_CASE("an SI bridge's document is in kN, kN-m, m and tonnes", "[report][results]") {
+  const test::RatedDemo demo = test::rate_demo("ev-0348-cedar-mill.yaml");
+  const json doc = report::results_document(demo.bridge, demo.rating, context());
+  CHECK(doc["units"]["system"] == "SI");
+  CHECK(doc["units"]["length"] == "m");
+  CHECK(doc["units"]["moment"] == "kN-m");
+  CHECK(doc["units"]["force"] == "kN");
+  CHECK(doc["units"]["weight"] == "tonne");
+  const pipeline::GirderLineDetail& d = demo.rating.details.front();
+  const json& g = doc["girders"][0];
+  for (std::size_t i = 0; i < d.points.size(); ++i) {
+    CHECK(g["points"][i]["station"].get<double>() == Approx(d.points[i].station));
+    // 1 kN-m = 1000 N*m (SI).
+    CHECK(g["dead_load"][0]["moment"][i].get<double>() * 1000 == Approx(d.dead_loads[0].moment[i]).margin(1e-6));
+  }
+  for (std::size_t i = 0; i < demo.rating.postings.size(); ++i)
+    // A tonne-force is 9.80665 kN (standard gravity, CGPM 1901).
+    CHECK(doc["postings"][i]["vehicle_weight"].get<double>() * 9806.65 ==
+          Approx(demo.rating.postings[i].rating_weight));
+}
+
+TEST_CASE("a NaN in a rating is refused with the bridge and the JSON path", "[report][results]") {
+  test::RatedDemo demo = test::rate_demo("ev-0207-quarry-hill.yaml");
+  REQUIRE_FALSE(demo.rating.governing.empty());
+  demo.rating.governing[0].at.result.capacity = std::numeric_limits<double>::quiet_NaN();
+  try {
+    (void)report::results_document(demo.bridge, demo.rating, context());
+    FAIL("no error");
+  } catch (const ModelError& e) {
+    CHECK(e.bridge_id() == "EV-0207");
+    CHECK(e.cause() == "results.json: the number at /governing/0/at/capacity is not finite (NaN or infinity)");
+  }
+}
