@@ -33,10 +33,10 @@ namespace {
   "r.id, r.run, r.structure_id, r.name, r.file, r.inputs_hash, r.status, r.reason, r.method, r.policy_id, "         \
   "r.policy_version, r.edition, r.vehicle_set, r.rating_date, r.inspection_date, r.weight_unit, r.recommendation, " \
   "r.recommendation_reason, r.rerate_by, r.post_by, r.warning_count, r.carried_from"
-#define TP_GOVERNING_COLUMNS                                                                                \
-  "g.result, g.load_model_id, g.name, g.category, g.level, g.rating_factor, g.rating_weight, g.girder_id, " \
+#define TP_GOVERNING_COLUMNS                                                                            \
+  "r.id, g.load_model_id, g.name, g.category, g.level, g.rating_factor, g.rating_weight, g.girder_id, " \
   "g.station, g.point, g.effect, g.limit_state, g.screened_out"
-#define TP_POSTING_COLUMNS "p.result, p.load_model_id, p.rating_factor, p.status, p.posted_weight, p.reason"
+#define TP_POSTING_COLUMNS "r.id, p.load_model_id, p.rating_factor, p.status, p.posted_weight, p.reason"
 #define TP_RUN_COLUMNS                                                                                   \
   "id, started, COALESCE(finished, ''), engine_version, policy_versions, command, shard, batch, rated, " \
   "unchanged, failed"
@@ -44,9 +44,9 @@ namespace {
 constexpr const char* kInsertResult =
     "INSERT INTO results (run, structure_id, name, file, inputs_hash, status, reason, method, policy_id, "
     "policy_version, edition, vehicle_set, rating_date, inspection_date, weight_unit, recommendation, "
-    "recommendation_reason, rerate_by, post_by, warning_count, governing_count, posting_count, carried_from) "
-    "VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, ?9, ?10, ?11, ?12, ?13, ?14, ?15, ?16, ?17, ?18, ?19, ?20, ?21, ?22, "
-    "?23)";
+    "recommendation_reason, rerate_by, post_by, warning_count, governing_count, posting_count, carried_from, "
+    "rows_of) VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7, ?8, ?9, ?10, ?11, ?12, ?13, ?14, ?15, ?16, ?17, ?18, ?19, ?20, ?21, "
+    "?22, ?23, ?24)";
 constexpr const char* kInsertGoverning =
     "INSERT INTO governing (result, ordinal, load_model_id, name, category, level, rating_factor, rating_weight, "
     "girder_id, station, point, effect, limit_state, screened_out) "
@@ -54,9 +54,12 @@ constexpr const char* kInsertGoverning =
 constexpr const char* kInsertPosting =
     "INSERT INTO postings (result, ordinal, load_model_id, rating_factor, status, posted_weight, reason) "
     "VALUES (?1, ?2, ?3, ?4, ?5, ?6, ?7)";
-// The children go with their result (ON DELETE CASCADE).
-constexpr const char* kDeleteById = "DELETE FROM results WHERE run = ?1 AND structure_id = ?2";
-constexpr const char* kDeleteByFile = "DELETE FROM results WHERE run = ?1 AND structure_id = '' AND file = ?2";
+// The bridge's earlier record in a run, and whether a later record shares its rows.
+constexpr const char* kFindById = "SELECT id FROM results WHERE run = ?1 AND structure_id = ?2";
+constexpr const char* kFindByFile = "SELECT id FROM results WHERE run = ?1 AND structure_id = '' AND file = ?2";
+constexpr const char* kSharedRows = "SELECT run FROM results WHERE rows_of = ?1 LIMIT 1";
+// Its own children go with it (ON DELETE CASCADE).
+constexpr const char* kDeleteResult = "DELETE FROM results WHERE id = ?1";
 
 std::string now_utc() {
   const std::time_t now = std::time(nullptr);
@@ -247,21 +250,27 @@ std::vector<StoredRecord> load_records(Database& db, const RecordQueries& q, Bin
 constexpr RecordQueries kRunRecords{
     "SELECT " TP_RESULT_COLUMNS " FROM results r WHERE r.run = ?1 ORDER BY r.structure_id, r.file, r.id",
     "SELECT " TP_GOVERNING_COLUMNS
-    " FROM governing g JOIN results r ON r.id = g.result WHERE r.run = ?1 ORDER BY g.result, g.ordinal",
+    " FROM results r JOIN governing g ON g.result = COALESCE(r.rows_of, r.id) WHERE r.run = ?1 "
+    "ORDER BY r.id, g.ordinal",
     "SELECT " TP_POSTING_COLUMNS
-    " FROM postings p JOIN results r ON r.id = p.result WHERE r.run = ?1 ORDER BY p.result, p.ordinal"};
+    " FROM results r JOIN postings p ON p.result = COALESCE(r.rows_of, r.id) WHERE r.run = ?1 "
+    "ORDER BY r.id, p.ordinal"};
 
 constexpr RecordQueries kBridgeRecords{
     "SELECT " TP_RESULT_COLUMNS " FROM results r WHERE r.structure_id = ?1 ORDER BY r.run, r.id",
     "SELECT " TP_GOVERNING_COLUMNS
-    " FROM governing g JOIN results r ON r.id = g.result WHERE r.structure_id = ?1 ORDER BY g.result, g.ordinal",
+    " FROM results r JOIN governing g ON g.result = COALESCE(r.rows_of, r.id) WHERE r.structure_id = ?1 "
+    "ORDER BY r.id, g.ordinal",
     "SELECT " TP_POSTING_COLUMNS
-    " FROM postings p JOIN results r ON r.id = p.result WHERE r.structure_id = ?1 ORDER BY p.result, p.ordinal"};
+    " FROM results r JOIN postings p ON p.result = COALESCE(r.rows_of, r.id) WHERE r.structure_id = ?1 "
+    "ORDER BY r.id, p.ordinal"};
 
 constexpr RecordQueries kOneRecord{
     "SELECT " TP_RESULT_COLUMNS " FROM results r WHERE r.id = ?1",
-    "SELECT " TP_GOVERNING_COLUMNS " FROM governing g WHERE g.result = ?1 ORDER BY g.ordinal",
-    "SELECT " TP_POSTING_COLUMNS " FROM postings p WHERE p.result = ?1 ORDER BY p.ordinal"};
+    "SELECT " TP_GOVERNING_COLUMNS
+    " FROM results r JOIN governing g ON g.result = COALESCE(r.rows_of, r.id) WHERE r.id = ?1 ORDER BY g.ordinal",
+    "SELECT " TP_POSTING_COLUMNS
+    " FROM results r JOIN postings p ON p.result = COALESCE(r.rows_of, r.id) WHERE r.id = ?1 ORDER BY p.ordinal"};
 
 // The fields of runs that merge joins: distinct entries in first-seen order.
 void append_distinct(std::string& joined, const std::string& entries) {
@@ -319,8 +328,10 @@ struct Ledger::Impl {
   std::optional<Statement> insert_result;
   std::optional<Statement> insert_governing;
   std::optional<Statement> insert_posting;
-  std::optional<Statement> delete_by_id;
-  std::optional<Statement> delete_by_file;
+  std::optional<Statement> find_by_id;
+  std::optional<Statement> find_by_file;
+  std::optional<Statement> shared_rows;
+  std::optional<Statement> delete_result;
   std::optional<Statement> run_exists;
 
   Statement& cached(std::optional<Statement>& slot, const char* sql) {
@@ -339,13 +350,29 @@ struct Ledger::Impl {
     if (!found) throw LedgerError(db.path(), fmt::format("there is no run {} in this ledger", run));
   }
 
+  // Removes the bridge's record in `run`, if any, inside the caller's
+  // transaction. Refused when a later run shares its rows (it would have to
+  // be rewritten, and a record of an older run is not what a rerun replaces).
+  void remove_record(RunId run, const std::string& structure_id, const std::string& file) {
+    Statement& find = structure_id.empty() ? cached(find_by_file, kFindByFile).bind(1, run).bind(2, file)
+                                           : cached(find_by_id, kFindById).bind(1, run).bind(2, structure_id);
+    if (!find.step()) return;
+    const std::int64_t id = find.column_int(0);
+    find.reset();
+    Statement& shared = cached(shared_rows, kSharedRows).bind(1, id);
+    if (shared.step())
+      throw LedgerError(db.path(), fmt::format("cannot replace bridge '{}' in run {}: run {} carries its ratings "
+                                               "forward; record it in a new run instead",
+                                               structure_id.empty() ? file : structure_id, run, shared.column_int(0)));
+    cached(delete_result, kDeleteResult).bind(1, id).run();
+  }
+
   // Writes one record inside the caller's transaction, replacing the
-  // bridge's earlier record in the same run.
-  void insert_record(RunId run, const BridgeRecord& r) {
-    if (r.structure_id.empty())
-      cached(delete_by_file, kDeleteByFile).bind(1, run).bind(2, r.file).run();
-    else
-      cached(delete_by_id, kDeleteById).bind(1, run).bind(2, r.structure_id).run();
+  // bridge's earlier record in the same run. With `rows_of`, the record
+  // shares that result's governing and posting rows (identical to its own,
+  // the caller guarantees) instead of writing them again.
+  void insert_record(RunId run, const BridgeRecord& r, std::optional<std::int64_t> rows_of = std::nullopt) {
+    remove_record(run, r.structure_id, r.file);
 
     Statement& s = cached(insert_result, kInsertResult);
     s.bind(1, run)
@@ -371,7 +398,9 @@ struct Ledger::Impl {
         .bind(21, static_cast<std::int64_t>(r.governing.size()))
         .bind(22, static_cast<std::int64_t>(r.postings.size()))
         .bind(23, r.carried_from)
+        .bind(24, rows_of)
         .run();
+    if (rows_of) return;
     const std::int64_t id = db.last_insert_rowid();
 
     std::int64_t ordinal = 0;
@@ -487,6 +516,10 @@ Ledger Ledger::open(const std::filesystem::path& path) {
   // A lost bridge has no record, so the next run rates it again.
   db.exec("PRAGMA synchronous = NORMAL");
   db.exec("PRAGMA foreign_keys = ON");
+  // 32 MiB of page cache (the default is 2 MiB): a night's transactions of
+  // thousands of rows then stay in memory instead of spilling mid-way and
+  // being read back; small beside the batch run's 500 MB budget.
+  db.exec("PRAGMA cache_size = -32768");
   detail::migrate(db);
   return Ledger(std::make_unique<Impl>(std::move(db)));
 }
@@ -514,29 +547,22 @@ void Ledger::carry_forward(RunId run, const std::vector<std::string>& structure_
   Transaction transaction(db);
   impl_->require_run(run);
   // One prepared statement per step, reused for every bridge, all inside one
-  // transaction: a night with 10,000 unchanged bridges costs one commit.
+  // transaction: a night with 10,000 unchanged bridges costs one commit. The
+  // copy is one results row sharing its source's governing and posting rows
+  // (rows_of), so an unchanged night does not write the inventory's ratings
+  // again: the ledger grows by what changed.
   Statement source(db,
-                   "SELECT id, COALESCE(carried_from, run) FROM results WHERE structure_id = ?1 AND "
-                   "status IN ('rated', 'unchanged') AND run < ?2 ORDER BY run DESC LIMIT 1");
-  Statement remove(db, kDeleteById);
-  Statement copy_result(
-      db,
-      "INSERT INTO results (run, structure_id, name, file, inputs_hash, status, reason, method, policy_id, "
-      "policy_version, edition, vehicle_set, rating_date, inspection_date, weight_unit, recommendation, "
-      "recommendation_reason, rerate_by, post_by, warning_count, governing_count, posting_count, carried_from) "
-      "SELECT ?1, structure_id, name, file, inputs_hash, 'unchanged', reason, method, policy_id, policy_version, "
-      "edition, vehicle_set, rating_date, inspection_date, weight_unit, recommendation, recommendation_reason, "
-      "rerate_by, post_by, warning_count, governing_count, posting_count, ?3 FROM results WHERE id = ?2");
-  Statement copy_governing(db,
-                           "INSERT INTO governing (result, ordinal, load_model_id, name, category, level, "
-                           "rating_factor, rating_weight, girder_id, station, point, effect, limit_state, "
-                           "screened_out) SELECT ?1, ordinal, load_model_id, name, category, level, rating_factor, "
-                           "rating_weight, girder_id, station, point, effect, limit_state, screened_out "
-                           "FROM governing WHERE result = ?2");
-  Statement copy_postings(db,
-                          "INSERT INTO postings (result, ordinal, load_model_id, rating_factor, status, "
-                          "posted_weight, reason) SELECT ?1, ordinal, load_model_id, rating_factor, status, "
-                          "posted_weight, reason FROM postings WHERE result = ?2");
+                   "SELECT COALESCE(rows_of, id), COALESCE(carried_from, run), id FROM results WHERE "
+                   "structure_id = ?1 AND status IN ('rated', 'unchanged') AND run < ?2 ORDER BY run DESC LIMIT 1");
+  Statement copy(db,
+                 "INSERT INTO results (run, structure_id, name, file, inputs_hash, status, reason, method, policy_id, "
+                 "policy_version, edition, vehicle_set, rating_date, inspection_date, weight_unit, recommendation, "
+                 "recommendation_reason, rerate_by, post_by, warning_count, governing_count, posting_count, "
+                 "carried_from, rows_of) "
+                 "SELECT ?1, structure_id, name, file, inputs_hash, 'unchanged', reason, method, policy_id, "
+                 "policy_version, edition, vehicle_set, rating_date, inspection_date, weight_unit, recommendation, "
+                 "recommendation_reason, rerate_by, post_by, warning_count, governing_count, posting_count, ?3, ?4 "
+                 "FROM results WHERE id = ?2");
   for (const std::string& id : structure_ids) {
     source.reset();
     source.bind(1, id).bind(2, run);
@@ -544,19 +570,14 @@ void Ledger::carry_forward(RunId run, const std::vector<std::string>& structure_
       throw LedgerError(db.path(), fmt::format("cannot carry bridge '{}' forward into run {}: it has no successful "
                                                "rating in an earlier run; nothing was carried",
                                                id, run));
-    const std::int64_t from = source.column_int(0);
+    const std::int64_t rows = source.column_int(0);
     const RunId computed_in = source.column_int(1);
+    const std::int64_t from = source.column_int(2);
     source.reset();
 
-    remove.reset();
-    remove.bind(1, run).bind(2, id).run();
-    copy_result.reset();
-    copy_result.bind(1, run).bind(2, from).bind(3, computed_in).run();
-    const std::int64_t to = db.last_insert_rowid();
-    copy_governing.reset();
-    copy_governing.bind(1, to).bind(2, from).run();
-    copy_postings.reset();
-    copy_postings.bind(1, to).bind(2, from).run();
+    impl_->remove_record(run, id, "");
+    copy.reset();
+    copy.bind(1, run).bind(2, from).bind(3, computed_in).bind(4, rows).run();
   }
   transaction.commit();
 }
@@ -717,6 +738,9 @@ void Ledger::merge(const std::vector<std::filesystem::path>& shards) {
   Statement already(db,
                     "SELECT 1 FROM results WHERE run = ?1 AND ((?2 <> '' AND structure_id = ?2) OR "
                     "(?2 = '' AND structure_id = '' AND file = ?3))");
+  Statement carried_rows(db,
+                         "SELECT COALESCE(rows_of, id) FROM results WHERE run = ?1 AND structure_id = ?2 AND "
+                         "status = 'rated'");
   for (const ShardRun& sr : shard_runs) {
     const RunId here = target.at({sr.shard, sr.info.id});
     for (BridgeRecord& record : opened[sr.shard].run_results(sr.info.id)) {
@@ -741,7 +765,16 @@ void Ledger::merge(const std::vector<std::filesystem::path>& shards) {
         already.reset();
       }
       check_finite(db, record);
-      impl_->insert_record(here, record);
+      // A carried record shares the rows of the record it carries, when
+      // that one is here already (merged in this call or before).
+      std::optional<std::int64_t> rows_of;
+      if (record.status == BridgeStatus::unchanged && record.carried_from && !record.structure_id.empty()) {
+        carried_rows.reset();
+        carried_rows.bind(1, *record.carried_from).bind(2, record.structure_id);
+        if (carried_rows.step()) rows_of = carried_rows.column_int(0);
+        carried_rows.reset();
+      }
+      impl_->insert_record(here, record, rows_of);
     }
   }
   transaction.commit();

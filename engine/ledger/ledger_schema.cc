@@ -54,12 +54,14 @@ CREATE TABLE results (
   warning_count         INTEGER NOT NULL,
   governing_count       INTEGER NOT NULL,
   posting_count         INTEGER NOT NULL,
-  carried_from          INTEGER REFERENCES runs(id)
+  carried_from          INTEGER REFERENCES runs(id),
+  rows_of               INTEGER REFERENCES results(id)
 );
 CREATE INDEX results_structure_run ON results(structure_id, run);
 CREATE INDEX results_file_run ON results(file, run);
 CREATE INDEX results_run ON results(run);
 CREATE UNIQUE INDEX results_one_per_run ON results(run, structure_id) WHERE structure_id <> '';
+CREATE INDEX results_rows_of ON results(rows_of) WHERE rows_of IS NOT NULL;
 
 CREATE TABLE governing (
   result        INTEGER NOT NULL REFERENCES results(id) ON DELETE CASCADE,
@@ -89,6 +91,17 @@ CREATE TABLE postings (
   reason        TEXT    NOT NULL,
   PRIMARY KEY (result, ordinal)
 ) WITHOUT ROWID;
+
+-- Each result with its governing rows and postings, wherever they are kept,
+-- for people and programs reading the file with SQL.
+CREATE VIEW result_governing AS
+  SELECT r.id AS result_id, r.run, r.structure_id, g.ordinal, g.load_model_id, g.name, g.category, g.level,
+         g.rating_factor, g.rating_weight, g.girder_id, g.station, g.point, g.effect, g.limit_state, g.screened_out
+  FROM results r JOIN governing g ON g.result = COALESCE(r.rows_of, r.id);
+CREATE VIEW result_postings AS
+  SELECT r.id AS result_id, r.run, r.structure_id, p.ordinal, p.load_model_id, p.rating_factor, p.status,
+         p.posted_weight, p.reason
+  FROM results r JOIN postings p ON p.result = COALESCE(r.rows_of, r.id);
 
 PRAGMA application_id = 1414548551;
 PRAGMA user_version = 1;

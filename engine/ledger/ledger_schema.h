@@ -8,12 +8,18 @@
 //              when killed), engine_version, policy_versions, command, shard,
 //              batch, rated/unchanged/failed counts
 //   results    one row per bridge per run: the BridgeRecord's scalar fields,
-//              carried_from (for unchanged: the run that computed the values)
+//              carried_from (for unchanged: the run that computed the values),
+//              rows_of (NULL: the governing and posting rows are this
+//              result's own; else the result whose rows they are, which an
+//              unchanged record shares instead of copying them every night)
 //              and governing_count/posting_count, the number of child rows
 //              the bridge was written with, so a partial bridge is detectable
 //   governing  one row per governing load model and level (result, ordinal)
 //   postings   one row per posted vehicle (result, ordinal)
+//   views result_governing and result_postings: each result with its rows,
+//              following rows_of, for reading the file with plain SQL
 // Indexes: results(structure_id, run) for history and carrying forward,
+// results(rows_of) for the foreign key,
 // results(file, run) for the incremental check, results(run) for a run's
 // results, and a partial unique index (run, structure_id) for non-empty ids:
 // one record per bridge per run.

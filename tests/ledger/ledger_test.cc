@@ -290,6 +290,27 @@ TEST_CASE("carry_forward copies the latest successful record with status unchang
 
   RawDatabase raw(ledger.path());
   CHECK(raw.value(test::kPartialBridges) == "0");
+  // Carried records share their source's rows rather than copying them; the
+  // view shows them with every result that has them.
+  CHECK(raw.value("SELECT count(*) FROM governing") == "6");
+  CHECK(raw.value("SELECT count(*) FROM result_governing WHERE run = 3") == "6");
+  CHECK(raw.value("SELECT count(*) FROM result_postings WHERE run = 3") == "4");
+}
+
+TEST_CASE("a record whose ratings a later run carries cannot be replaced", "[ledger]") {
+  const auto dir = scratch_dir("carriedreplace");
+  Ledger ledger = Ledger::open(dir / "ledger.sqlite");
+  const RunId r1 = ledger.begin_run(run_info("2026-11-28T02:00:00Z"));
+  ledger.record_bridge(r1, full_record("EV-0112", 0.91));
+  const RunId r2 = ledger.begin_run(run_info("2026-11-29T02:00:00Z"));
+  ledger.carry_forward(r2, {"EV-0112"});
+  CHECK_THROWS_WITH(ledger.record_bridge(r1, full_record("EV-0112", 0.50)),
+                    Catch::Contains("EV-0112") && Catch::Contains("run 2 carries"));
+  CHECK(ledger.run_results(r2)[0].governing[0].rating_factor == 0.91);
+  // Replacing the carried record itself is fine: a rerun rates it after all.
+  ledger.record_bridge(r2, full_record("EV-0112", 0.50));
+  CHECK(ledger.run_results(r2)[0].status == BridgeStatus::rated);
+  CHECK(ledger.run_results(r1)[0].governing[0].rating_factor == 0.91);
 }
 
 TEST_CASE("carry_forward of a bridge never rated carries nothing at all", "[ledger]") {

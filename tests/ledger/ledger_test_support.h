@@ -109,10 +109,12 @@ class RawDatabase {
   sqlite3* db_ = nullptr;
 };
 
-// Results whose stored child-row counts do not match the rows present: a
-// partial bridge. Zero for a ledger of whole bridges.
+// Results whose stored child-row counts do not match the rows present (their
+// own, or those of the result they share through rows_of): a partial
+// bridge. Zero for a ledger of whole bridges.
 inline constexpr const char* kPartialBridges =
     "SELECT count(*) FROM results r WHERE r.governing_count <> (SELECT count(*) FROM governing g WHERE g.result = "
-    "r.id) OR r.posting_count <> (SELECT count(*) FROM postings p WHERE p.result = r.id)";
+    "COALESCE(r.rows_of, r.id)) OR r.posting_count <> (SELECT count(*) FROM postings p WHERE p.result = "
+    "COALESCE(r.rows_of, r.id))";
 
 }  // namespace tenthpoint::ledger::test
