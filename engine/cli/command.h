@@ -30,6 +30,7 @@ class Command {
 std::unique_ptr<Command> make_check_command();
 std::unique_ptr<Command> make_diagrams_command();
 std::unique_ptr<Command> make_rate_command();
+std::unique_ptr<Command> make_export_command();
 std::unique_ptr<Command> make_history_command();
 std::unique_ptr<Command> make_changes_command();
 

@@ -42,7 +42,7 @@ int main(int argc, char** argv) {
   };
   std::vector<Declared> commands;
   for (auto make : {make_check_command, make_rate_command, make_diagrams_command, make_history_command,
-                    make_changes_command}) {
+                    make_changes_command, make_export_command}) {
     auto command = make();
     CLI::App* sub = command->declare(app);
     commands.push_back({std::move(command), sub});
