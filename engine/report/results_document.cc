@@ -39,8 +39,16 @@ json plain_array(const std::vector<Real>& values) {
   return out;
 }
 
-Quantity effect_quantity(rating::RatedEffect e) {
-  return e == rating::RatedEffect::shear ? Quantity::force : Quantity::moment;
+bool is_service(rating::LimitState state) {
+  return state == rating::LimitState::service_i || state == rating::LimitState::service_ii ||
+         state == rating::LimitState::service_iii;
+}
+
+// The quantity of a rating's capacity and terms: a moment or a force for the
+// strength limit states, a stress for the service ones (C = fR, MBE 6A.4.2.1).
+Quantity rating_quantity(const rating::PointRating& p) {
+  if (is_service(p.limit_state)) return Quantity::stress;
+  return p.effect == rating::RatedEffect::shear ? Quantity::force : Quantity::moment;
 }
 
 json units_table(const UserUnits& u) {
@@ -49,6 +57,7 @@ json units_table(const UserUnits& u) {
           {"moment", u.label(Quantity::moment)},
           {"force", u.label(Quantity::force)},
           {"line_load", u.label(Quantity::line_load)},
+          {"stress", u.label(Quantity::stress)},
           {"angle", u.label(Quantity::angle)},
           // Posting signs read in short tons (US) or tonnes (SI).
           {"weight", u.system == units::UnitSystem::us ? "ton" : "tonne"},
@@ -252,6 +261,7 @@ json capacities_json(const rating::GirderRating& g, std::size_t point_count, con
   for (const rating::LoadModelRating& m : g.load_models)
     for (const rating::LevelRating& l : m.levels)
       for (const rating::PointRating& p : l.points) {
+        if (is_service(p.limit_state)) continue;  // an allowable stress, not a resistance
         const int slot = p.effect == rating::RatedEffect::positive_moment   ? 0
                          : p.effect == rating::RatedEffect::negative_moment ? 1
                          : p.side == "left"                                 ? 2
@@ -289,7 +299,7 @@ json rating_factor_value(const rating::RatingFactorResult& r) {
 }
 
 json point_rating_json(const rating::PointRating& p, const UserUnits& u, bool full) {
-  const Quantity q = effect_quantity(p.effect);
+  const Quantity q = rating_quantity(p);
   json row{{"point", p.point},
            {"effect", str(rating::to_string(p.effect))},
            {"side", p.side},
@@ -300,6 +310,7 @@ json point_rating_json(const rating::PointRating& p, const UserUnits& u, bool fu
            {"live_factored", u(p.result.live, q)},
            {"distribution", p.distribution},
            {"impact", p.impact},
+           {"gamma_ll", p.gamma_ll},
            {"case", p.case_id}};
   if (full) {
     row["station"] = u(p.station, Quantity::length);
@@ -308,7 +319,6 @@ json point_rating_json(const rating::PointRating& p, const UserUnits& u, bool fu
     row["resistance"] = u(p.resistance, q);
     row["resistance_article"] = p.resistance_article;
     row["capacity_factor"] = p.capacity_factor;
-    row["gamma_ll"] = p.gamma_ll;
     row["terms"] = terms_json(p.result, q, u);
   }
   return row;
@@ -320,11 +330,8 @@ json ratings_json(const rating::GirderRating& g, const UserUnits& u) {
     for (const rating::LevelRating& l : m.levels) {
       json points = json::array();
       for (const rating::PointRating& p : l.points) points.push_back(point_rating_json(p, u, false));
-      // gamma_LL (or A2) is one value per level and load model.
-      const Real gamma = l.points.empty() ? 0.0 : l.points.front().gamma_ll;
       out.push_back({{"load_model_id", m.load_model_id},
                      {"level", str(model::to_string(l.level))},
-                     {"gamma_ll", gamma},
                      {"factor_source", l.factor_source},
                      {"points", points},
                      {"governing", l.governing ? point_rating_json(*l.governing, u, true) : json(nullptr)}});

@@ -12,7 +12,8 @@
 // Units: the bridge's own system (its `units`, US or SI), converted with
 // engine/core/units.h from_internal, and named in the document's "units"
 // table: stations and spans ft / m, moments kip-ft / kN-m, shears and axle
-// weights kip / kN, vehicle weights, ratings and postings ton / tonne.
+// weights kip / kN, stresses ksi / MPa (the capacity and terms of a service
+// limit-state rating), vehicle weights, ratings and postings ton / tonne.
 // Rating, distribution and impact factors are dimensionless. Signs as
 // analysis::InfluenceLines (sagging moment positive; shear = resultant of
 // the forces left of the cut, upward positive); capacities and the terms
