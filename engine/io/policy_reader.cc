@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <filesystem>
+#include <map>
 #include <set>
 
 #include <fmt/format.h>
@@ -140,7 +141,7 @@ class PolicyBuilder {
     p.units = units_;
     p.confidentiality_notice = r_.optional_text("confidentiality_notice");
     read_vehicles(p);
-    read_lrfr(p.lrfr, r_.at("lrfr"));
+    read_lrfr(p.lrfr, r_.at("lrfr"), p.vehicles);
     read_lfr(p.lfr, r_.at("lfr"));
     const FieldReader da = r_.at("dynamic_allowance");
     p.dynamic_allowance.standard = da.number("standard");
@@ -266,14 +267,28 @@ class PolicyBuilder {
     return model::LevelFactors{r.number("inventory"), r.number("operating")};
   }
 
-  void read_lrfr(model::LrfrFactors& f, const FieldReader& r) {
+  void read_lrfr(model::LrfrFactors& f, const FieldReader& r, const model::VehicleLibrary& library) {
     const FieldReader s = r.at("strength_i");
     f.strength_i = model::StrengthDeadLoadFactors{s.number("dc"), s.number("dw"), s.number("dw_field_measured")};
     f.design = levels(r.at("design"));
     f.service_ii = levels(r.at("service_ii"));
+    f.service_ii_legal = r.at("service_ii").optional_number("legal");
+    f.service_ii_permit = r.at("service_ii").optional_number("permit");
     f.service_iii = r.at("service_iii").number("standard");
     f.service_iii_refined_losses = r.at("service_iii").number("refined_losses");
+    f.service_iii_legal = r.at("service_iii").optional_number("legal");
     f.service_i_permit = r.number("service_i_permit");
+    if (r.has("service_checks")) {
+      const FieldReader c = r.at("service_checks");
+      model::ServiceChecks& k = f.service_checks;
+      k.service_ii_design_inventory = c.boolean("service_ii_design_inventory", k.service_ii_design_inventory);
+      k.service_ii_design_operating = c.boolean("service_ii_design_operating", k.service_ii_design_operating);
+      k.service_ii_legal = c.boolean("service_ii_legal", k.service_ii_legal);
+      k.service_ii_permit = c.boolean("service_ii_permit", k.service_ii_permit);
+      k.service_iii_design_inventory = c.boolean("service_iii_design_inventory", k.service_iii_design_inventory);
+      k.service_iii_legal = c.boolean("service_iii_legal", k.service_iii_legal);
+      k.service_i_permit = c.boolean("service_i_permit", k.service_i_permit);
+    }
     const FieldReader legal = r.at("legal");
     const std::vector<FieldReader> rows = legal.items("adtt_table");
     for (std::size_t i = 0; i < rows.size(); ++i) {
@@ -284,7 +299,29 @@ class PolicyBuilder {
     }
     f.legal.unknown_adtt = legal.number("unknown_adtt");
     f.legal.between_rows = legal.enumeration("between_rows", model::RowInterpolation::interpolate);
-    for (const auto& [id, type] : r.at("permit_types").members()) f.permit_types.push_back(read_permit_type(id, type));
+    std::map<std::string, std::string> permit_of;  // load model -> permit type
+    for (const auto& [id, type] : r.at("permit_types").members()) {
+      f.permit_types.push_back(read_permit_type(id, type));
+      if (!type.has("load_models")) continue;
+      for (const FieldReader& item : type.items("load_models")) {
+        const std::string& vehicle = item.node().text;
+        f.permit_types.back().load_models.push_back(vehicle);
+        const model::LoadModel* found = library.find_load_model(vehicle);
+        if (found == nullptr) {
+          std::vector<std::string> known;
+          for (const model::LoadModel& m : library.load_models) known.push_back(m.id);
+          std::string message = fmt::format("unknown load model '{}'", vehicle);
+          if (auto suggestion = nearest_name(vehicle, known))
+            message += fmt::format(" (did you mean '{}'?)", *suggestion);
+          error(item, message);
+        } else if (found->category != model::VehicleCategory::permit) {
+          error(item,
+                fmt::format("load model '{}' is a {} load, not a permit", vehicle, model::to_string(found->category)));
+        }
+        if (const auto [it, inserted] = permit_of.emplace(vehicle, id); !inserted)
+          error(item, fmt::format("load model '{}' is already rated as permit type '{}'", vehicle, it->second));
+      }
+    }
     const FieldReader ev = r.at("emergency");
     f.emergency =
         model::EmergencyFactors{ev.number("gamma_ll"), ev.enumeration("lanes", model::EmergencyLanes::every_lane)};

@@ -76,6 +76,13 @@ const PermitType* LrfrFactors::find_permit_type(std::string_view id) const {
   return it == permit_types.end() ? nullptr : &*it;
 }
 
+const PermitType* LrfrFactors::find_permit_type_for(std::string_view load_model_id) const {
+  auto it = std::find_if(permit_types.begin(), permit_types.end(), [&](const PermitType& p) {
+    return std::find(p.load_models.begin(), p.load_models.end(), load_model_id) != p.load_models.end();
+  });
+  return it == permit_types.end() ? nullptr : &*it;
+}
+
 Real LrfrFactors::multiple_presence_for(int lanes) const { return last_or_indexed(multiple_presence, lanes); }
 
 Real ImpactFormula::at(Real span_length) const { return std::min(maximum, numerator / (span_length + offset)); }

@@ -86,6 +86,19 @@ struct PermitType {
   bool divide_out_multiple_presence = false;
   std::optional<Real> dynamic_allowance;  // replaces the standard IM when set
   std::vector<PermitRow> rows;
+  std::vector<std::string> load_models;  // the permit vehicles rated as this type
+};
+
+// Which service limit states are rated (MBE Table 6A.4.2.2-1 and 6A.4.2.2;
+// some checks are optional by agency). Defaults as stated.
+struct ServiceChecks {
+  bool service_ii_design_inventory = true;   // steel, design load at inventory
+  bool service_ii_design_operating = true;   // steel, design load at operating
+  bool service_ii_legal = true;              // steel, legal and specialized hauling loads, emergency vehicles
+  bool service_ii_permit = true;             // steel, permits
+  bool service_iii_design_inventory = true;  // prestressed concrete, design load at inventory
+  bool service_iii_legal = false;            // prestressed concrete, legal loads (optional, MBE 6A.5.4.1)
+  bool service_i_permit = true;              // concrete under permits
 };
 
 struct EmergencyFactors {
@@ -95,17 +108,23 @@ struct EmergencyFactors {
 
 struct LrfrFactors {
   StrengthDeadLoadFactors strength_i;
-  LevelFactors design;      // Strength I gamma_LL, design-load rating
-  LevelFactors service_ii;  // steel
-  Real service_iii = 0;     // prestressed concrete
+  LevelFactors design;                    // Strength I gamma_LL, design-load rating
+  LevelFactors service_ii;                // steel, design load
+  std::optional<Real> service_ii_legal;   // steel, legal loads
+  std::optional<Real> service_ii_permit;  // steel, permits
+  Real service_iii = 0;                   // prestressed concrete, design load
   Real service_iii_refined_losses = 0;
+  std::optional<Real> service_iii_legal;  // prestressed concrete, legal loads
   Real service_i_permit = 0;
+  ServiceChecks service_checks;
   LegalLoadFactors legal;
   std::vector<PermitType> permit_types;
   EmergencyFactors emergency;
   std::vector<Real> multiple_presence;  // m for 1, 2, 3, ... lanes; the last for more
 
   [[nodiscard]] const PermitType* find_permit_type(std::string_view id) const;
+  // The permit type whose load_models name `load_model_id`; nullptr if none.
+  [[nodiscard]] const PermitType* find_permit_type_for(std::string_view load_model_id) const;
   // m for `lanes` loaded lanes (>= 1).
   [[nodiscard]] Real multiple_presence_for(int lanes) const;
 };

@@ -69,6 +69,15 @@ rating::GirderDistribution distribution_at_points(const distribution::GirderLine
   return d;
 }
 
+// The one-lane factors (their multiple presence included) at each point, by
+// the same regions, for permits that cross alone (MBE 6A.4.5.4.2b).
+rating::GirderDistribution one_lane_at_points(distribution::GirderLineFactors f,
+                                              const std::vector<analysis::AnalysisPoint>& points,
+                                              std::size_t span_count) {
+  for (distribution::DistributionFactor& factor : f.factors) factor.value = factor.one_lane;
+  return distribution_at_points(f, points, span_count);
+}
+
 // Dynamic allowance per point, by the rules of engine/distribution
 // (dynamic_allowance.h): LRFR IM for the riding surface on axle loads only;
 // LFR impact on truck and lane loading with L per effect. For negative
@@ -179,6 +188,9 @@ BridgeRating rate_bridge(const model::Bridge& bridge, const model::Policy& polic
     in.distribution =
         lrfr ? distribution_at_points(factors, analysis.live_influence.points, bridge.geometry.span_lengths.size())
              : lfr_distribution_at_points(*lfr_factors, analysis.live_influence.points.size());
+    if (lrfr)
+      in.one_lane_distribution =
+          one_lane_at_points(factors, analysis.live_influence.points, bridge.geometry.span_lengths.size());
     in.impact = impact_at_points(bridge, policy, analysis.live_influence.points);
     in.adtt = bridge.traffic.adtt;
     in.wearing_surface_field_measured = analysis.wearing_surface_field_measured;

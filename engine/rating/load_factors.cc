@@ -68,14 +68,21 @@ LiveLoadFactor live_load_factor(const model::LrfrFactors& factors, model::Vehicl
     case VehicleCategory::legal:
     case VehicleCategory::specialized_hauling:
       // MBE 6A.4.4.2.3: legal loads at one level, gamma_LL by ADTT; Service II
-      // for steel uses the operating Service II factor (MBE Table 6A.4.2.2-1).
+      // for steel and (where rated) Service III for prestressed concrete take
+      // the legal-load column of MBE Table 6A.4.2.2-1.
       if (state == LimitState::strength_i) {
         if (factors.legal.rows.empty()) missing("lrfr.legal");
         return {factors.legal.gamma_ll(adtt),
                 fmt::format("policy lrfr.legal at {} (MBE Table 6A.4.4.2.3a-1)", adtt_text(adtt))};
       }
-      if (state == LimitState::service_ii)
-        return {factors.service_ii.operating, "policy lrfr.service_ii.operating (MBE Table 6A.4.2.2-1)"};
+      if (state == LimitState::service_ii) {
+        if (!factors.service_ii_legal) missing("lrfr.service_ii.legal");
+        return {*factors.service_ii_legal, "policy lrfr.service_ii.legal (MBE Table 6A.4.2.2-1)"};
+      }
+      if (state == LimitState::service_iii) {
+        if (!factors.service_iii_legal) missing("lrfr.service_iii.legal");
+        return {*factors.service_iii_legal, "policy lrfr.service_iii.legal (MBE Table 6A.4.2.2-1)"};
+      }
       break;
     case VehicleCategory::emergency:
       if (state == LimitState::strength_i)
@@ -84,7 +91,14 @@ LiveLoadFactor live_load_factor(const model::LrfrFactors& factors, model::Vehicl
         return {factors.service_ii.operating, "policy lrfr.service_ii.operating (MBE Table 6A.4.2.2-1)"};
       break;
     case VehicleCategory::permit:
-      break;  // see permit_live_load_factor
+      // Strength II: see permit_live_load_factor (by permit type).
+      if (state == LimitState::service_ii) {
+        if (!factors.service_ii_permit) missing("lrfr.service_ii.permit");
+        return {*factors.service_ii_permit, "policy lrfr.service_ii.permit (MBE Table 6A.4.2.2-1)"};
+      }
+      if (state == LimitState::service_i)
+        return {factors.service_i_permit, "policy lrfr.service_i_permit (MBE Table 6A.4.2.2-1)"};
+      break;
   }
   missing(fmt::format("{} at {} ({})", model::to_string(category), level_name, to_string(state)));
 }

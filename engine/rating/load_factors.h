@@ -23,11 +23,13 @@ struct LiveLoadFactor {
 
 // gamma_LL for a load model of `category` rated at `level` in `state`, for a
 // bridge with `adtt` (nullopt = unknown). Legal loads and specialized
-// hauling vehicles use the ADTT table; emergency vehicles the policy's EV
-// factor; design loads the design (or Service II / III) factors. Permits are
-// not handled here (their factor depends on the permit type and the loading
-// ratio: see permit_live_load_factor). Throws InputError when the policy has
-// no factor for the case.
+// hauling vehicles use the ADTT table at Strength I and the policy's legal
+// Service II / III factors; emergency vehicles the policy's EV factor; design
+// loads the design (or Service II / III) factors; permits their Service II
+// and Service I factors. Strength II of permits is not handled here (its
+// factor depends on the permit type and the loading ratio: see
+// permit_live_load_factor). Throws InputError when the policy has no factor
+// for the case.
 [[nodiscard]] LiveLoadFactor live_load_factor(const model::LrfrFactors& factors, model::VehicleCategory category,
                                               model::RatingLevel level, LimitState state, std::optional<Real> adtt);
 
