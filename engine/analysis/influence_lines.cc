@@ -4,6 +4,7 @@
 #include <array>
 #include <cassert>
 #include <cmath>
+#include <cstring>
 
 namespace tenthpoint::analysis {
 namespace {
@@ -183,6 +184,38 @@ InfluenceLines compute_influence_lines(const LineGirderModel& model, const Influ
     out.supports.push_back(std::move(s));
   }
   return out;
+}
+
+bool identical(const InfluenceLines& a, const InfluenceLines& b) {
+  // Reals are compared by their bits (as identical() on curves does), so a
+  // signed zero or a NaN never passes for its look-alike.
+  const auto same = [](Real x, Real y) { return std::memcmp(&x, &y, sizeof(Real)) == 0; };
+  const auto same_point = [&](const AnalysisPoint& p, const AnalysisPoint& q) {
+    return same(p.station, q.station) && p.span == q.span && same(p.span_fraction, q.span_fraction) &&
+           p.support == q.support && p.tenth == q.tenth && p.hinge == q.hinge && p.section_change == q.section_change &&
+           p.labels == q.labels;
+  };
+  if (a.bridge_id != b.bridge_id || !same(a.length, b.length) || a.support_lines != b.support_lines ||
+      a.points.size() != b.points.size() || a.at_points.size() != b.at_points.size() ||
+      a.supports.size() != b.supports.size())
+    return false;
+  for (std::size_t i = 0; i < a.points.size(); ++i)
+    if (!same_point(a.points[i], b.points[i])) return false;
+  for (std::size_t i = 0; i < a.at_points.size(); ++i) {
+    const PointInfluenceLines& p = a.at_points[i];
+    const PointInfluenceLines& q = b.at_points[i];
+    if (!identical(p.moment, q.moment) || !identical(p.shear_left, q.shear_left) ||
+        !identical(p.shear_right, q.shear_right) || !identical(p.deflection, q.deflection))
+      return false;
+  }
+  for (std::size_t i = 0; i < a.supports.size(); ++i) {
+    const SupportInfluenceLines& p = a.supports[i];
+    const SupportInfluenceLines& q = b.supports[i];
+    if (p.support_line != q.support_line || !same(p.station, q.station) || !identical(p.reaction, q.reaction) ||
+        !identical(p.moment, q.moment))
+      return false;
+  }
+  return true;
 }
 
 }  // namespace tenthpoint::analysis

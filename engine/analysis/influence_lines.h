@@ -91,4 +91,11 @@ enum class ShearSide { none, left, right };
 [[nodiscard]] InfluenceLines compute_influence_lines(const LineGirderModel& model,
                                                      const InfluenceLineOptions& options = {});
 
+// True when `a` and `b` are the same influence lines bit for bit: the same
+// bridge, length, support lines, analysis points (stations, spans, labels and
+// flags) and every curve identical (piecewise_cubic.h). Anything computed
+// from one set of lines alone, such as its moving-load envelopes, then holds
+// for the other. Never approximate: lines equal only to rounding differ.
+[[nodiscard]] bool identical(const InfluenceLines& a, const InfluenceLines& b);
+
 }  // namespace tenthpoint::analysis

@@ -3,6 +3,7 @@
 #include <algorithm>
 #include <cassert>
 #include <cmath>
+#include <cstring>
 #include <limits>
 
 namespace tenthpoint::analysis {
@@ -389,6 +390,27 @@ SampledCurve PiecewiseCubic::sample(int interior_points) const {
     out.values.push_back(p.value(p.end));
   }
   return out;
+}
+
+namespace {
+
+// Bitwise equality of two arrays of Real; memcmp rather than ==, so that the
+// signed zeros and NaNs that == would equate or separate are compared as
+// stored.
+bool same_bits(const Real* a, const Real* b, std::size_t count) {
+  return count == 0 || std::memcmp(a, b, count * sizeof(Real)) == 0;
+}
+
+}  // namespace
+
+bool identical(const PiecewiseCubic& a, const PiecewiseCubic& b) {
+  if (a.empty() || b.empty()) return a.empty() && b.empty();
+  const std::vector<Real>& ka = a.knots();
+  const std::vector<Real>& kb = b.knots();
+  if (ka.size() != kb.size() || a.piece_count() != b.piece_count()) return false;
+  if (a.shared_knots() != b.shared_knots() && !same_bits(ka.data(), kb.data(), ka.size())) return false;
+  static_assert(sizeof(PiecewiseCubic::Coefficients) == 4 * sizeof(Real));
+  return same_bits(a.coefficients().front().data(), b.coefficients().front().data(), 4 * a.piece_count());
 }
 
 }  // namespace tenthpoint::analysis

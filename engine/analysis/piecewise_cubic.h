@@ -135,4 +135,10 @@ class PiecewiseCubic {
   std::vector<Coefficients> coefficients_;
 };
 
+// True when both curves have the same knots and coefficients bit for bit
+// (so -0.0 and 0.0 differ, and a NaN never matches): the test for reusing a
+// result computed from one curve for the other. Two empty curves are
+// identical.
+[[nodiscard]] bool identical(const PiecewiseCubic& a, const PiecewiseCubic& b);
+
 }  // namespace tenthpoint::analysis

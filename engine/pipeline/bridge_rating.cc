@@ -13,7 +13,7 @@
 #include "engine/distribution/dynamic_allowance.h"
 #include "engine/distribution/lfr_distribution.h"
 #include "engine/distribution/lrfd_distribution.h"
-#include "engine/live_load/prepared_influence_lines.h"
+#include "engine/live_load/envelope_cache.h"
 
 namespace tenthpoint::pipeline {
 namespace {
@@ -153,11 +153,12 @@ BridgeRating rate_bridge(const model::Bridge& bridge, const model::Policy& polic
       capacity::condition_system_factors(bridge, policy, model::ForceEffect::shear, as_of);
   const distribution::DistributionOptions distribution_options = distribution::DistributionOptions::from_policy(policy);
 
+  // Girder lines with identical live-load influence lines share their
+  // envelopes (live_load/envelope_cache.h): the same numbers, computed once.
+  live_load::EnvelopeCache envelope_cache(models, policy.vehicles);
   for (const model::GirderLine& girder : bridge.girders) {
     const analysis::GirderLineAnalysis analysis = analysis::analyse_girder_line(bridge, girder);
-    const live_load::PreparedInfluenceLines lines(analysis.live_influence);
-    const std::vector<live_load::MovingLoadEnvelope> envelopes =
-        live_load::compute_moving_load_envelopes(lines, models, policy.vehicles);
+    const std::vector<live_load::MovingLoadEnvelope>& envelopes = envelope_cache.envelopes_for(analysis.live_influence);
     // Prestressed webs take the general procedure of LRFD 5.7.3.4.2 (the
     // simplified one ignores the prestress); reinforced concrete keeps the
     // simplified procedure of 5.7.3.4.1, which is written for it.

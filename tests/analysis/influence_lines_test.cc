@@ -243,3 +243,28 @@ TEST_CASE("hinges over the piers turn a continuous girder into simple spans", "[
   TP_CHECK_CLOSE(lines.support(1)->reaction.value(12.5), 0.5, kExact, 1.0);
   TP_CHECK_CLOSE(lines.support(1)->reaction.value(40.0), 0.5, kExact, 1.0);
 }
+
+TEST_CASE("influence lines of the same girder built twice are identical; a stiffness change of 1e-12 is not",
+          "[analysis][influence][identical]") {
+  // The same inputs give the same bits (the solve is deterministic), which is
+  // what lets girder lines of one bridge share their moving-load envelopes.
+  const Real l = 100.0 * units::kFoot;
+  const auto lines_of = [&](Real ei_span_2, const char* label) {
+    FlexuralRigidity rigidity;
+    rigidity.then_prismatic(l, 3.7e9).then_prismatic(l, ei_span_2);
+    GirderLayout layout = continuous_girder("ID-2", {l, l});
+    layout.named_points.push_back({label, 0.35 * l});
+    return compute_influence_lines(LineGirderModel(layout, rigidity));
+  };
+  const InfluenceLines first = lines_of(3.7e9, "splice");
+  CHECK(identical(first, lines_of(3.7e9, "splice")));
+  const Real nudged_ei = 3.7e9 * (1 + 1e-12);
+  CHECK_FALSE(identical(first, lines_of(nudged_ei, "splice")));
+  CHECK_FALSE(identical(first, lines_of(3.7e9, "field splice")));  // labels are part of the record
+
+  // The nudged girder still has the two-span closed form of this file's
+  // first test (within its 1e-9): equal to rounding, yet not identical.
+  const InfluenceLines nudged = lines_of(nudged_ei, "splice");
+  const PiecewiseCubic& m_b = nudged.at_points[point_at(nudged, l)].moment;
+  TP_CHECK_CLOSE(m_b.value(60.0 * units::kFoot) / units::kFoot, -9.600, kExact, 1.0);
+}

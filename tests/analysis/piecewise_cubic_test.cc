@@ -129,3 +129,24 @@ TEST_CASE("sampling lists both limits at a jump", "[analysis][piecewise_cubic]")
   CHECK(s.stations == std::vector<Real>{0.0, 0.5, 1.0, 1.0, 1.5, 2.0});
   CHECK(s.values == std::vector<Real>{0.0, 0.5, 1.0, 0.0, 0.5, 1.0});
 }
+
+TEST_CASE("identical curves are equal bit for bit, never to rounding", "[analysis][piecewise_cubic][identical]") {
+  // The rule is the engine's own (piecewise_cubic.h): results computed from
+  // one curve may be reused for another only when both hold the same bits.
+  const PiecewiseCubic a({0.0, 1.0, 2.0}, {{1.0, 2.0, 3.0, 4.0}, {0.0, -1.0, 0.5, 0.25}});
+  const PiecewiseCubic same_values({0.0, 1.0, 2.0}, {{1.0, 2.0, 3.0, 4.0}, {0.0, -1.0, 0.5, 0.25}});
+  CHECK(identical(a, a));
+  CHECK(identical(a, same_values));  // separate knot vectors with the same values
+  CHECK(identical(PiecewiseCubic{}, PiecewiseCubic{}));
+  CHECK_FALSE(identical(a, PiecewiseCubic{}));
+
+  // One unit in the last place of one coefficient, or of one knot, differs.
+  const Real nudged = std::nextafter(0.25, 1.0);
+  CHECK_FALSE(identical(a, PiecewiseCubic({0.0, 1.0, 2.0}, {{1.0, 2.0, 3.0, 4.0}, {0.0, -1.0, 0.5, nudged}})));
+  CHECK_FALSE(identical(
+      a, PiecewiseCubic({0.0, std::nextafter(1.0, 2.0), 2.0}, {{1.0, 2.0, 3.0, 4.0}, {0.0, -1.0, 0.5, 0.25}})));
+  // == would call -0.0 and 0.0 equal; their bits differ, so they are not identical.
+  CHECK_FALSE(identical(a, PiecewiseCubic({0.0, 1.0, 2.0}, {{1.0, 2.0, 3.0, 4.0}, {-0.0, -1.0, 0.5, 0.25}})));
+  // Different piece counts over the same domain.
+  CHECK_FALSE(identical(a, PiecewiseCubic({0.0, 2.0}, {{1.0, 2.0, 3.0, 4.0}})));
+}
