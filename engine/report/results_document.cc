@@ -312,6 +312,8 @@ json point_rating_json(const rating::PointRating& p, const UserUnits& u, bool fu
            {"impact", p.impact},
            {"gamma_ll", p.gamma_ll},
            {"case", p.case_id}};
+  // Service limit states: the flange or fibre whose stress is rated.
+  if (!p.fibre.empty()) row["fibre"] = p.fibre;
   if (full) {
     row["station"] = u(p.station, Quantity::length);
     row["label"] = p.label;
@@ -330,8 +332,14 @@ json ratings_json(const rating::GirderRating& g, const UserUnits& u) {
     for (const rating::LevelRating& l : m.levels) {
       json points = json::array();
       for (const rating::PointRating& p : l.points) points.push_back(point_rating_json(p, u, false));
+      json factors = json::array();
+      for (const rating::LimitStateFactor& f : l.factors)
+        factors.push_back(
+            {{"limit_state", str(rating::to_string(f.limit_state))}, {"gamma_ll", f.gamma_ll}, {"source", f.source}});
       out.push_back({{"load_model_id", m.load_model_id},
                      {"level", str(model::to_string(l.level))},
+                     {"permit_type", m.permit_type},
+                     {"factors", factors},
                      {"factor_source", l.factor_source},
                      {"points", points},
                      {"governing", l.governing ? point_rating_json(*l.governing, u, true) : json(nullptr)}});

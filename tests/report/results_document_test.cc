@@ -192,3 +192,28 @@ TEST_CASE("a NaN in a rating is refused with the bridge and the JSON path", "[re
     CHECK(e.cause() == "results.json: the number at /governing/0/at/capacity is not finite (NaN or infinity)");
   }
 }
+
+TEST_CASE("service limit-state ratings are written as stresses", "[report][results]") {
+  // EV-0207 is prestressed concrete: Service III is rated (MBE Table 6A.4.2.2-1, from memory).
+  const test::RatedDemo demo = test::rate_demo("ev-0207-quarry-hill.yaml");
+  const json doc = report::results_document(demo.bridge, demo.rating, context());
+  CHECK(doc["units"]["stress"] == "ksi");
+  // 1 ksi = 1000 lbf / in^2 = 4448.2216152605 N / (0.0254 m)^2 (NIST SP 811 B.8).
+  const double ksi = 4448.2216152605 / (0.0254 * 0.0254);
+  std::size_t service = 0;
+  for (std::size_t gi = 0; gi < demo.rating.girders.size(); ++gi) {
+    std::size_t k = 0;
+    for (const rating::LoadModelRating& m : demo.rating.girders[gi].load_models)
+      for (const rating::LevelRating& l : m.levels) {
+        const json& rows = doc["girders"][gi]["ratings"][k++]["points"];
+        for (std::size_t p = 0; p < l.points.size(); ++p) {
+          if (l.points[p].limit_state != rating::LimitState::service_iii) continue;
+          ++service;
+          CHECK(rows[p]["limit_state"] == "Service III");
+          TP_CHECK_CLOSE(rows[p]["capacity"].get<double>() * ksi, l.points[p].result.capacity, 1e-12, 1.0);
+          CHECK_FALSE(rows[p]["fibre"].get<std::string>().empty());
+        }
+      }
+  }
+  CHECK(service > 0);
+}
