@@ -17,6 +17,7 @@
 #include "engine/capacity/steel_flange_flexure.h"
 #include "engine/capacity/steel_shear.h"
 #include "engine/core/errors.h"
+#include "engine/section/concrete_modulus.h"
 
 namespace tenthpoint::capacity {
 namespace {
@@ -365,6 +366,30 @@ PrestressedServiceLimits GirderCapacity::prestressed_service(Real station, secti
   out = prestressed_service_limits(s.label, girder, materials_, *s.analysis, options_.prestressed_service,
                                    options_.section, options_.density_factor);
   out.warnings.insert(out.warnings.end(), s.deteriorated.warnings.begin(), s.deteriorated.warnings.end());
+  for (const std::string& note : s.deteriorated.notes) out.trace.add_note(note);
+  return out;
+}
+
+ReinforcedServiceLimits GirderCapacity::reinforced_service(Real station, MomentSign sign, section::Side side) const {
+  ReinforcedServiceLimits out;
+  if (materials_.kind != model::MaterialKind::reinforced_concrete) {
+    out.status = ResistanceStatus::unavailable;
+    out.reason = fmt::format("girder {}: the Service I steel stress applies to reinforced concrete only", girder_.id);
+    return out;
+  }
+  const State s = state_at(station, side);
+  if (!s.deteriorated.section.description) {
+    out.status = ResistanceStatus::unavailable;
+    out.reason = fmt::format("{}: no section description to take the bars from", s.label);
+    return out;
+  }
+  const ConcreteMemberSections member =
+      reinforced_concrete_sections(s.deteriorated.section, materials_, sign, options_.density_factor, source_file_);
+  // The compression concrete is the beam's (girder_concrete), which the
+  // builder has required.
+  const Real ec = section::concrete_modulus(*materials_.girder_concrete, options_.section.concrete_modulus_formula,
+                                            options_.section.aggregate_factor, "materials.girder_concrete");
+  out = reinforced_service_limits(member.flexure, ec);
   for (const std::string& note : s.deteriorated.notes) out.trace.add_note(note);
   return out;
 }

@@ -56,6 +56,7 @@
 #include "engine/capacity/capacity_options.h"
 #include "engine/capacity/concrete_shear.h"
 #include "engine/capacity/prestressed_service_limits.h"
+#include "engine/capacity/reinforced_service_limits.h"
 #include "engine/capacity/resistance.h"
 #include "engine/capacity/section_loss.h"
 #include "engine/capacity/steel_service_limits.h"
@@ -96,6 +97,11 @@ class GirderCapacity {
   // section without a description.
   [[nodiscard]] PrestressedServiceLimits prestressed_service(Real station,
                                                              section::Side side = section::Side::right) const;
+  // Service I steel-stress data for permits on reinforced concrete, for
+  // `sign`; unavailable for a bridge that is not reinforced concrete or a
+  // section without a description or without tension bars on that face.
+  [[nodiscard]] ReinforcedServiceLimits reinforced_service(Real station, MomentSign sign,
+                                                           section::Side side = section::Side::right) const;
 
  private:
   struct State;

@@ -117,6 +117,7 @@ StageMoments stage_moments(const analysis::GirderLineAnalysis& a, std::size_t po
 struct PointService {
   std::array<capacity::SteelServiceLimits, 2> steel;
   std::array<capacity::PrestressedServiceLimits, 2> prestressed;
+  std::array<std::array<capacity::ReinforcedServiceLimits, 2>, 2> reinforced;  // [positive, negative][side]
 };
 
 // Reasons a service check is skipped or qualified repeat at every section;
@@ -215,6 +216,9 @@ std::vector<LimitState> rated_limit_states(model::RatingMethod method, model::Ma
     const bool rate = design ? level == RatingLevel::inventory && checks.service_iii_design_inventory
                              : legal && checks.service_iii_legal;
     if (rate) states.push_back(LimitState::service_iii);
+  } else if (material == model::MaterialKind::reinforced_concrete) {
+    // Service I for permits on reinforced concrete: the steel stress.
+    if (permit && checks.service_i_permit) states.push_back(LimitState::service_i);
   }
   return states;
 }
@@ -255,7 +259,29 @@ GirderRating rate_girder_line(const GirderRatingInputs& in) {
   // Service data, computed once per point for every load model.
   const bool steel = model::is_steel(in.material);
   const bool prestressed = in.material == model::MaterialKind::prestressed_concrete;
+  const bool reinforced = in.material == model::MaterialKind::reinforced_concrete;
   std::vector<PointService> service(points.size());
+  const bool any_permit = std::any_of(in.load_models.begin(), in.load_models.end(), [](const RatedLoadModel& m) {
+    return m.model->category == model::VehicleCategory::permit;
+  });
+  if (!lfr && reinforced && any_permit && in.policy->lrfr.service_checks.service_i_permit) {
+    const Real length = in.capacity->length();
+    for (std::size_t i = 0; i < points.size(); ++i) {
+      const Real station = points[i].station;
+      for (int sign = 0; sign < 2; ++sign)
+        for (int s = 0; s < 2; ++s) {
+          const bool left = s == 0;
+          capacity::ReinforcedServiceLimits& r = service[i].reinforced[sign][s];
+          if (left ? !(station > 0) : !(station < length)) {
+            r.status = capacity::ResistanceStatus::unavailable;
+            continue;
+          }
+          r = in.capacity->reinforced_service(
+              station, sign == 0 ? capacity::MomentSign::positive : capacity::MomentSign::negative,
+              left ? section::Side::left : section::Side::right);
+        }
+    }
+  }
   if (!lfr && (steel || prestressed)) {
     RepeatedNotes skipped;
     RepeatedNotes qualified;
@@ -341,11 +367,9 @@ GirderRating rate_girder_line(const GirderRatingInputs& in) {
       if (permit->dynamic_allowance)
         impact = DynamicAllowanceAt::uniform(points.size(), *permit->dynamic_allowance, false);
     }
-    if (!lfr && lm.category == model::VehicleCategory::permit && !model::is_steel(in.material) &&
-        lrfr.service_checks.service_i_permit) {
+    if (!lfr && lm.category == model::VehicleCategory::permit && prestressed && lrfr.service_checks.service_i_permit) {
       mr.warnings.push_back(
-          "Service I for permits on concrete (MBE Table 6A.4.2.2-1: reinforcement stress under the permit) is not "
-          "rated; only Strength II is");
+          "Service I for permits on prestressed concrete (MBE Table 6A.4.2.2-1) is not rated; only Strength II is");
     }
 
     for (model::RatingLevel level : rating_levels(lm.category)) {
@@ -484,6 +508,7 @@ GirderRating rate_girder_line(const GirderRatingInputs& in) {
             // Service III covers the bottom fibre in positive moment only
             // (prestressed_service_limits.h).
             if (factor.limit_state == LimitState::service_iii && !positive) continue;
+            const int sign_index = positive ? 0 : 1;
             const Real sense = positive ? 1.0 : -1.0;  // moments as magnitudes in the adverse sense
             const Real im = positive ? impact.positive_moment[i] : impact.negative_moment[i];
             const Real distribution = positive ? g.moment_positive[i] : g.moment_negative[i];
@@ -494,7 +519,24 @@ GirderRating rate_girder_line(const GirderRatingInputs& in) {
             // The lower rating of the two sides of the point, per fibre.
             std::optional<PointRating> fibre_best[2];
             for (int s = 0; s < 2; ++s) {
-              if (factor.limit_state == LimitState::service_ii) {
+              if (factor.limit_state == LimitState::service_i) {
+                const capacity::ReinforcedServiceLimits& limits = service[i].reinforced[sign_index][s];
+                if (limits.status == capacity::ResistanceStatus::unavailable) continue;
+                // MBE 6A.5.4.2.2b (from memory): fs under the permit <= 0.9 fy,
+                // every load on the one cracked section (fs = M / Ss).
+                const Real ss = limits.steel_section_modulus;
+                PointRating pr = start(i, effect, "", live, distribution, im);
+                pr.fibre = "tension steel";
+                pr.resistance = limits.allowable_stress;
+                pr.resistance_article = "MBE 6A.5.4.2.2b";
+                pr.result = rating_factor(
+                    limits.allowable_stress,
+                    {{"fsDC", kServiceDead, sense * (m.dc1 + m.dc2) / ss}, {"fsDW", kServiceDead, sense * m.dw / ss}},
+                    {"fsLL+IM", gamma_ll, live.value / ss});
+                if (pr.result.status == RatingStatus::rated &&
+                    (!fibre_best[0] || pr.result.rating_factor < fibre_best[0]->result.rating_factor))
+                  fibre_best[0] = std::move(pr);
+              } else if (factor.limit_state == LimitState::service_ii) {
                 const capacity::SteelServiceLimits& limits = service[i].steel[s];
                 if (limits.status == capacity::ResistanceStatus::unavailable) continue;
                 const capacity::StageModuli& moduli = positive ? limits.positive_moment : limits.negative_moment;

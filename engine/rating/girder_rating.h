@@ -23,7 +23,9 @@
 //                 the noncomposite section, DC2 and DW on the long-term and
 //                 LL + IM on the short-term composite section), gamma_D = 1.0;
 //   Service III   prestressed concrete, bottom fibre in positive moment:
-//                 RF = (fR - fD - fP) / (gamma_L fL), tension positive.
+//                 RF = (fR - fD - fP) / (gamma_L fL), tension positive;
+//   Service I     permits on reinforced concrete, tension steel stress on
+//                 the cracked section, fR = 0.9 fy (MBE 6A.5.4.2.2b).
 // Service limit states take no phi_c phi_s (C = fR, MBE 6A.4.2.1); their
 // RatingFactorResult terms are stresses in Pa, not moments. LFR rates the
 // strength limit state only (MBE 6B.4.1).
@@ -117,7 +119,7 @@ struct PointRating {
   RatedEffect effect = RatedEffect::positive_moment;
   std::string side;  // "left"/"right" of the point for shear; "" for moment
   LimitState limit_state = LimitState::strength_i;
-  std::string fibre;  // service limit states: "top flange", "bottom flange", "bottom fibre"; "" for strength
+  std::string fibre;  // service: "top flange", "bottom flange", "bottom fibre", "tension steel"; "" for strength
   model::RatingLevel level = model::RatingLevel::inventory;
   RatingFactorResult result;
   Real capacity_factor = 1;  // phi_c phi_s (LRFR); 1 for LFR
@@ -169,8 +171,8 @@ struct GirderRating {
 // The limit states a load model of `category` is rated at, at `level`, on a
 // girder of `material` by `method`, as the policy's service_checks switch
 // them (MBE Table 6A.4.2.2-1; LFR: strength only). The strength state comes
-// first. Service I for permits on concrete is not rated (see the warnings of
-// rate_girder_line).
+// first. Service I for permits on prestressed concrete is not rated (a
+// warning of rate_girder_line says so).
 [[nodiscard]] std::vector<LimitState> rated_limit_states(model::RatingMethod method, model::MaterialKind material,
                                                          model::VehicleCategory category, model::RatingLevel level,
                                                          const model::ServiceChecks& checks);

@@ -511,3 +511,59 @@ TEST_CASE("the Eastvale permit truck's loading ratio is its gross weight over it
   REQUIRE(policy.lrfr.find_permit_type_for("EC-P8") != nullptr);
   CHECK(policy.lrfr.find_permit_type_for("EC-P8")->id == "routine");
 }
+
+TEST_CASE("a permit on reinforced concrete rates at Service I with the cracked-section steel stress",
+          "[rating][permit][service]") {
+  // A 24 x 60 in rectangular beam, As = 20 in^2 at d = 56 in, fy = 60 ksi,
+  // f'c = 4 ksi with Ec given as 3600 ksi (n = 29000 / 3600); DC 1.2 and DW
+  // 0.2 kip/ft on the 100 ft span; the two-axle test permit (1500 kip-ft at
+  // midspan, g = 0.6, IM 0.33) as a routine permit.
+  const TestPermit permit = test_permit();
+  model::Policy policy = eastvale_policy();
+  policy.vehicles.merge(permit.library);
+  for (model::PermitType& t : policy.lrfr.permit_types)
+    if (t.id == "routine") t.load_models = {"TEST-P2"};
+  model::Bridge bridge = simple_span(model::MaterialKind::reinforced_concrete);
+  bridge.materials.girder_concrete = model::Concrete{4 * kKsi, 3600 * kKsi, capacity::test::kcf(0.150)};
+  bridge.materials.reinforcement = model::Reinforcement{60 * kKsi, 29000 * kKsi};
+  model::SectionDefinition s;
+  s.id = "S";
+  model::ReinforcedConcreteBeam beam;
+  beam.height = 60 * kIn;
+  beam.web_width = 24 * kIn;
+  beam.flange_width = 24 * kIn;
+  beam.bottom_bars = {model::BarLayer{20 * kIn * kIn, 56 * kIn}};
+  s.description = beam;
+  bridge.sections.push_back(s);
+  bridge.dead_loads = {uniform(model::DeadLoadComponent::dc1, 1.2), uniform(model::DeadLoadComponent::dw, 0.2)};
+  const analysis::GirderLineAnalysis analysis = analysis::analyse_girder_line(bridge, bridge.girders[0]);
+  const live_load::PreparedInfluenceLines lines(analysis.live_influence);
+  const std::vector<live_load::MovingLoadEnvelope> envelopes =
+      live_load::compute_moving_load_envelopes(lines, {&permit.model}, policy.vehicles);
+  const capacity::GirderCapacity capacity(bridge, bridge.girders[0]);
+  GirderRatingInputs in = inputs(analysis, capacity, policy);
+  in.material = bridge.materials.kind;
+  in.adtt = 2500;
+  in.load_models = {{&permit.model, &envelopes[0]}};
+  const GirderRating rating = rate_girder_line(in);
+  const LevelRating& level = rating.load_models[0].levels[0];
+  REQUIRE(level.factors.size() == 2);
+  CHECK(level.factors[1].limit_state == LimitState::service_i);
+  CHECK(level.factors[1].gamma_ll == Approx(1.00));  // policy service_i_permit (MBE Table 6A.4.2.2-1, from memory)
+
+  // By hand (elastic cracked section, textbook): 24 kd^2 / 2 = n As (56 - kd);
+  // Icr = 24 kd^3 / 3 + n As (56 - kd)^2; fs = n M (d - kd) / Icr; fR = 0.9
+  // fy = 54 ksi (MBE 6A.5.4.2.2b, from memory); RF = (fR - fs,D) / (1.0 fs,L).
+  const Real n = 29000.0 / 3600.0;
+  const Real nas = n * 20;
+  const Real kd = (-nas + std::sqrt(nas * nas + 2 * 24 * nas * 56)) / 24;
+  const Real icr = 24 * kd * kd * kd / 3 + nas * (56 - kd) * (56 - kd);
+  const Real ss = icr / (n * (56 - kd));
+  const Real fs_dead = (1500 + 250) * 12 / ss;
+  const Real fs_live = 0.6 * 1.33 * 1500 * 12 / ss;
+  const PointRating* mid = at_midspan(level, LimitState::service_i, RatedEffect::positive_moment);
+  REQUIRE(mid != nullptr);
+  CHECK(mid->fibre == "tension steel");
+  TP_CHECK_CLOSE(mid->result.rating_factor, (54 - fs_dead) / fs_live, kHand, 1.0);
+  TP_CHECK_CLOSE(kd, 21.52, 1e-3, 1.0);  // the neutral axis depth as worked by hand above
+}
