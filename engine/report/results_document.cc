@@ -156,56 +156,74 @@ json impact_json(const pipeline::GirderLineDetail& d) {
           {"applies_to_lane", d.impact.applies_to_lane}};
 }
 
-json placement_json(const live_load::AxleChain* chain, const live_load::TrainPlacement& p, const UserUnits& u) {
-  json spacings = json::array();
-  if (chain != nullptr) {
-    // TrainPlacement::variable_spacings holds the variable links in chain
-    // order; a link between two trains is a gap, the others axle spacings.
-    std::size_t v = 0;
-    for (std::size_t link = 0; link < chain->links.size() && v < live_load::kMaxVariableLinks; ++link) {
-      if (!chain->links[link].variable()) continue;
-      const bool gap = chain->axles_per_train > 0 && (link + 1) % chain->axles_per_train == 0;
-      spacings.push_back({{"link", link + 1},
-                          {"kind", gap ? "gap" : "spacing"},
-                          {"value", u(p.variable_spacings[v], Quantity::length)}});
-      ++v;
-    }
+// The variable links of a chain in chain order, as TrainPlacement's
+// variable_spacings holds their values: a link between two trains is a gap,
+// the others axle spacings.
+json variable_links(const live_load::AxleChain& chain) {
+  json out = json::array();
+  for (std::size_t link = 0; link < chain.links.size(); ++link) {
+    if (!chain.links[link].variable()) continue;
+    const bool gap = chain.axles_per_train > 0 && (link + 1) % chain.axles_per_train == 0;
+    out.push_back({{"link", link + 1}, {"kind", gap ? "gap" : "spacing"}});
   }
-  json dropped = json::array();
-  if (chain != nullptr)
-    for (std::size_t a = 0; a < chain->axle_count(); ++a)
-      if (p.is_dropped(a)) dropped.push_back(a + 1);
-  return {{"direction", str(live_load::to_string(p.direction))},
-          {"lead_axle_station", u(p.lead_station, Quantity::length)},
-          {"approach", str(live_load::to_string(p.approach))},
-          {"variable_links", spacings},
+  return out;
+}
+
+// One extreme of one effect as columns, one entry per analysis point (a
+// table of arrays, not an array of objects: the document stays small and
+// quick to build for a nightly run of many bridges).
+json envelope_columns(const pipeline::LoadModelEnvelope& m,
+                      const std::vector<live_load::ExtremePair<pipeline::EnvelopeEntry>>& values,
+                      live_load::Extreme extreme, Quantity q, const UserUnits& u) {
+  json cases = json::array(), train = json::array(), lane = json::array(), combined = json::array();
+  json distributed = json::array(), distributed_case = json::array();
+  json direction = json::array(), lead = json::array(), approach = json::array(), links = json::array(),
+       dropped = json::array();
+  for (const auto& pair : values) {
+    const pipeline::EnvelopeEntry& e = pair[extreme];
+    const pipeline::EnvelopeCase* c = e.static_case >= 0 ? &m.cases[static_cast<std::size_t>(e.static_case)] : nullptr;
+    const live_load::AxleChain* chain = c && c->chain ? &*c->chain : nullptr;
+    cases.push_back(e.static_case >= 0 ? json(e.static_case) : json(nullptr));
+    train.push_back(u(e.train, q));
+    lane.push_back(u(e.lane, q));
+    combined.push_back(u(e.total, q));
+    distributed.push_back(u(e.distributed, q));
+    distributed_case.push_back(e.distributed_case >= 0 ? json(e.distributed_case) : json(nullptr));
+    if (!e.placement || chain == nullptr) {
+      for (json* column : {&direction, &lead, &approach, &links, &dropped}) column->push_back(nullptr);
+      continue;
+    }
+    const live_load::TrainPlacement& p = *e.placement;
+    direction.push_back(str(live_load::to_string(p.direction)));
+    lead.push_back(u(p.lead_station, Quantity::length));
+    approach.push_back(str(live_load::to_string(p.approach)));
+    json v = json::array();
+    const std::size_t variable = std::min(chain->variable_link_count(), live_load::kMaxVariableLinks);
+    for (std::size_t i = 0; i < variable; ++i) v.push_back(u(p.variable_spacings[i], Quantity::length));
+    links.push_back(std::move(v));
+    json d = json::array();
+    for (std::size_t axle = 0; axle < chain->axle_count(); ++axle)
+      if (p.is_dropped(axle)) d.push_back(axle + 1);
+    dropped.push_back(std::move(d));
+  }
+  return {{"case", cases},
+          {"train", train},
+          {"lane", lane},
+          {"combined", combined},
+          {"distributed", distributed},
+          {"distributed_case", distributed_case},
+          {"direction", direction},
+          {"lead_axle_station", lead},
+          {"approach", approach},
+          {"variable_links", links},
           {"dropped_axles", dropped}};
 }
 
 json envelope_entries(const pipeline::LoadModelEnvelope& m,
                       const std::vector<live_load::ExtremePair<pipeline::EnvelopeEntry>>& values, Quantity q,
                       const UserUnits& u) {
-  json out = json::object();
-  for (live_load::Extreme extreme : live_load::kExtremes) {
-    json list = json::array();
-    for (const auto& pair : values) {
-      const pipeline::EnvelopeEntry& e = pair[extreme];
-      const pipeline::EnvelopeCase* c =
-          e.static_case >= 0 ? &m.cases[static_cast<std::size_t>(e.static_case)] : nullptr;
-      const live_load::AxleChain* chain = c && c->chain ? &*c->chain : nullptr;
-      list.push_back({{"case", c ? json(c->case_id) : json(nullptr)},
-                      {"train", u(e.train, q)},
-                      {"lane", u(e.lane, q)},
-                      {"combined", u(e.total, q)},
-                      {"placement", e.placement ? placement_json(chain, *e.placement, u) : json(nullptr)},
-                      {"distributed", u(e.distributed, q)},
-                      {"distributed_case", e.distributed_case >= 0
-                                               ? json(m.cases[static_cast<std::size_t>(e.distributed_case)].case_id)
-                                               : json(nullptr)}});
-    }
-    out[str(live_load::to_string(extreme))] = std::move(list);
-  }
-  return out;
+  return {{"maximum", envelope_columns(m, values, live_load::Extreme::maximum, q, u)},
+          {"minimum", envelope_columns(m, values, live_load::Extreme::minimum, q, u)}};
 }
 
 const rating::LoadModelRating* find_model(const rating::GirderRating& g, const std::string& id) {
@@ -232,6 +250,7 @@ json live_load_json(const pipeline::GirderLineDetail& d, const rating::GirderRat
                        {"trains", c.chain ? c.chain->train_count : 0},
                        {"axle_weights", axles},
                        {"axle_spacings", spacings},
+                       {"variable_links", c.chain ? variable_links(*c.chain) : json::array()},
                        {"lane", c.has_lane}});
     }
     const rating::LoadModelRating* rated = girder ? find_model(*girder, m.load_model_id) : nullptr;
@@ -298,7 +317,7 @@ json rating_factor_value(const rating::RatingFactorResult& r) {
   return r.status == rating::RatingStatus::rated ? json(r.rating_factor) : json(nullptr);
 }
 
-json point_rating_json(const rating::PointRating& p, const UserUnits& u, bool full) {
+json point_rating_json(const rating::PointRating& p, const UserUnits& u) {
   const Quantity q = rating_quantity(p);
   json row{{"point", p.point},
            {"effect", str(rating::to_string(p.effect))},
@@ -311,27 +330,56 @@ json point_rating_json(const rating::PointRating& p, const UserUnits& u, bool fu
            {"distribution", p.distribution},
            {"impact", p.impact},
            {"gamma_ll", p.gamma_ll},
-           {"case", p.case_id}};
-  // Service limit states: the flange or fibre whose stress is rated.
-  if (!p.fibre.empty()) row["fibre"] = p.fibre;
-  if (full) {
-    row["station"] = u(p.station, Quantity::length);
-    row["label"] = p.label;
-    row["level"] = str(model::to_string(p.level));
-    row["resistance"] = u(p.resistance, q);
-    row["resistance_article"] = p.resistance_article;
-    row["capacity_factor"] = p.capacity_factor;
-    row["terms"] = terms_json(p.result, q, u);
-  }
+           {"case", p.case_id},
+           // Service limit states: the flange or fibre whose stress is rated.
+           {"fibre", p.fibre},
+           {"station", u(p.station, Quantity::length)},
+           {"label", p.label},
+           {"level", str(model::to_string(p.level))},
+           {"resistance", u(p.resistance, q)},
+           {"resistance_article", p.resistance_article},
+           {"capacity_factor", p.capacity_factor},
+           {"terms", terms_json(p.result, q, u)}};
   return row;
+}
+
+// Every rated point of one load model and level as columns, one entry per
+// rating (see envelope_columns for why columns).
+json rating_columns(const std::vector<rating::PointRating>& points, const UserUnits& u) {
+  json point = json::array(), effect = json::array(), side = json::array(), limit_state = json::array(),
+       fibre = json::array(), rf = json::array(), capacity = json::array(), permanent = json::array(),
+       live = json::array(), distribution = json::array(), impact = json::array(), gamma = json::array(),
+       load_case = json::array();
+  for (const rating::PointRating& p : points) {
+    const Quantity q = rating_quantity(p);
+    point.push_back(p.point);
+    effect.push_back(str(rating::to_string(p.effect)));
+    side.push_back(p.side);
+    limit_state.push_back(str(rating::to_string(p.limit_state)));
+    fibre.push_back(p.fibre);
+    rf.push_back(rating_factor_value(p.result));
+    capacity.push_back(u(p.result.capacity, q));
+    permanent.push_back(u(p.result.permanent, q));
+    live.push_back(u(p.result.live, q));
+    distribution.push_back(p.distribution);
+    impact.push_back(p.impact);
+    gamma.push_back(p.gamma_ll);
+    load_case.push_back(p.case_id);
+  }
+  return {{"point", point},        {"effect", effect},
+          {"side", side},          {"limit_state", limit_state},
+          {"fibre", fibre},        {"rating_factor", rf},
+          {"capacity", capacity},  {"permanent_factored", permanent},
+          {"live_factored", live}, {"distribution", distribution},
+          {"impact", impact},      {"gamma_ll", gamma},
+          {"case", load_case}};
 }
 
 json ratings_json(const rating::GirderRating& g, const UserUnits& u) {
   json out = json::array();
   for (const rating::LoadModelRating& m : g.load_models)
     for (const rating::LevelRating& l : m.levels) {
-      json points = json::array();
-      for (const rating::PointRating& p : l.points) points.push_back(point_rating_json(p, u, false));
+      const json points = rating_columns(l.points, u);
       json factors = json::array();
       for (const rating::LimitStateFactor& f : l.factors)
         factors.push_back(
@@ -342,7 +390,7 @@ json ratings_json(const rating::GirderRating& g, const UserUnits& u) {
                      {"factors", factors},
                      {"factor_source", l.factor_source},
                      {"points", points},
-                     {"governing", l.governing ? point_rating_json(*l.governing, u, true) : json(nullptr)}});
+                     {"governing", l.governing ? point_rating_json(*l.governing, u) : json(nullptr)}});
     }
   return out;
 }
@@ -365,7 +413,7 @@ json governing_json(const pipeline::BridgeRating& r, const UserUnits& u) {
                    {"vehicle_weight", u.optional(g.rating_weight, Quantity::weight_tons)},
                    {"rating", u.optional(g.rating_weight_rated, Quantity::weight_tons)},
                    {"girder_id", g.girder_id},
-                   {"at", point_rating_json(p, u, true)},
+                   {"at", point_rating_json(p, u)},
                    {"screened_out", g.screened_out},
                    {"screening_reason", g.screening_reason}});
   }
