@@ -19,6 +19,11 @@
 // the forces left of the cut, upward positive); capacities and the terms
 // of a rating factor are magnitudes.
 //
+// The large tables (envelopes per effect and extreme, the ratings of a load
+// model at a level) are columns: one array per field, entry i belonging to
+// analysis point i (envelopes) or to rating i (ratings); cases are referred
+// to by their index in the load model's "cases".
+//
 // Every number in the document is finite: results_document throws
 // ModelError naming the bridge and the JSON path of the first NaN or
 // infinity (see finite_numbers.h).
