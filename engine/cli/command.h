@@ -31,6 +31,7 @@ std::unique_ptr<Command> make_check_command();
 std::unique_ptr<Command> make_diagrams_command();
 std::unique_ptr<Command> make_rate_command();
 std::unique_ptr<Command> make_export_command();
+std::unique_ptr<Command> make_merge_command();
 std::unique_ptr<Command> make_history_command();
 std::unique_ptr<Command> make_changes_command();
 

@@ -41,8 +41,8 @@ int main(int argc, char** argv) {
     CLI::App* subcommand;
   };
   std::vector<Declared> commands;
-  for (auto make : {make_check_command, make_rate_command, make_diagrams_command, make_history_command,
-                    make_changes_command, make_export_command}) {
+  for (auto make : {make_check_command, make_rate_command, make_merge_command, make_diagrams_command,
+                    make_history_command, make_changes_command, make_export_command}) {
     auto command = make();
     CLI::App* sub = command->declare(app);
     commands.push_back({std::move(command), sub});
