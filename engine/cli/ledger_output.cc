@@ -96,6 +96,7 @@ std::string text_table(const std::vector<std::vector<std::string>>& rows, const 
       else
         line += last ? row[c] : fmt::format("{:<{}}", row[c], width[c]);
     }
+    line.erase(line.find_last_not_of(' ') + 1);
     out += line + '\n';
   }
   return out;

@@ -34,7 +34,7 @@ void add_ledger_options(CLI::App* sub, LedgerLocation& location);
 [[nodiscard]] nlohmann::json record_json(const ledger::BridgeRecord& record);
 
 // Columns padded to their widest cell, two spaces apart; columns whose index
-// is in `right` are right-aligned (numbers). Each line ends with '\n'.
+// is in `right` are right-aligned (numbers). Each line ends with '\n', without trailing spaces.
 [[nodiscard]] std::string text_table(const std::vector<std::vector<std::string>>& rows,
                                      const std::vector<std::size_t>& right = {});
 

@@ -483,6 +483,11 @@ Ledger Ledger::open(const std::filesystem::path& path) {
   if (std::filesystem::exists(path, ec) && std::filesystem::file_size(path, ec) > 0 && !has_sqlite_header(path))
     throw LedgerError(path, "is not a tenthpoint ledger (not an SQLite database file)");
   if (std::filesystem::is_directory(path, ec)) throw LedgerError(path, "is a directory, not a ledger file");
+  // The ledger lives in the output directory, which a first run creates.
+  if (path.has_parent_path() && !std::filesystem::exists(path.parent_path(), ec)) {
+    std::filesystem::create_directories(path.parent_path(), ec);
+    if (ec) throw LedgerError(path, "cannot create its directory: " + ec.message());
+  }
 
   Database db(path, Database::Mode::read_write_create);
   // Wait up to 10 s for another writer (a merge, a second run on the same

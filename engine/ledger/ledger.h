@@ -51,9 +51,10 @@ struct HistoryEntry {
 
 class Ledger {
  public:
-  // Opens (creating and migrating as needed) the ledger at `path`. Throws
-  // LedgerError naming the file when it cannot be opened, is not a ledger,
-  // or was written by a newer engine.
+  // Opens (creating it and its directory, and migrating, as needed) the
+  // ledger at `path`. Throws LedgerError naming the file when it cannot be
+  // opened, is not a ledger, or was written by a newer engine; such a file is
+  // left as it was.
   [[nodiscard]] static Ledger open(const std::filesystem::path& path);
 
   Ledger(Ledger&&) noexcept;

@@ -61,6 +61,14 @@ TEST_CASE("a new ledger gets schema version 1 and the ledger application id", "[
   CHECK(raw.value("PRAGMA journal_mode") == "wal");
 }
 
+TEST_CASE("a ledger in a directory that does not exist yet creates the directory", "[ledger]") {
+  const auto dir = scratch_dir("mkdir");
+  const auto path = dir / "reports" / "night" / "ledger.sqlite";
+  Ledger ledger = Ledger::open(path);
+  CHECK(std::filesystem::is_regular_file(path));
+  CHECK(ledger.integrity_ok());
+}
+
 TEST_CASE("a reopened ledger keeps its runs and records and is not migrated again", "[ledger]") {
   const auto dir = scratch_dir("reopen");
   const auto path = dir / "ledger.sqlite";
