@@ -3,6 +3,9 @@
 #include <atomic>
 #include <cassert>
 #include <chrono>
+#include <filesystem>
+#include <fstream>
+#include <optional>
 #include <set>
 #include <thread>
 #include <unordered_map>
@@ -19,7 +22,6 @@
 #include "engine/batch/utc_timestamp.h"
 #include "engine/core/version.h"
 #include "engine/io/bridge_reader.h"
-#include "engine/io/text_file.h"
 
 namespace tenthpoint::batch {
 namespace {
@@ -48,6 +50,23 @@ class WorkerPool {
   BoundedQueue<BridgeOutcome>& queue_;
   std::vector<std::thread> threads_;
 };
+
+// A file's bytes, exactly as io::read_text_file returns them for a good text
+// file (so the hash agrees with the worker's), without its validation: a
+// file that is not good text was never rated, so its hash cannot match and
+// the worker reports it. Reads only the file's size, not the reader's cap.
+std::optional<std::string> file_bytes(const std::string& path, std::size_t max_bytes) {
+  std::error_code ec;
+  const std::uintmax_t size = std::filesystem::file_size(path, ec);
+  if (ec || size > max_bytes) return std::nullopt;
+  std::ifstream in(path, std::ios::binary);
+  if (!in) return std::nullopt;
+  std::string bytes(static_cast<std::size_t>(size), '\0');
+  in.read(bytes.data(), static_cast<std::streamsize>(bytes.size()));
+  if (static_cast<std::size_t>(in.gcount()) != bytes.size() || in.peek() != std::char_traits<char>::eof())
+    return std::nullopt;  // changed while read: let the worker read it properly
+  return bytes;
+}
 
 void count_into(BatchProgress& progress, ledger::BridgeStatus status) {
   switch (status) {
@@ -117,8 +136,8 @@ ledger::RunInfo run_batch(ledger::Ledger& ledger, ledger::RunInfo info, const st
     if (it != last.end()) job.last_inputs_hash = it->second.inputs_hash;
     const std::vector<std::string>* dependencies = index.find(file);
     if (!options.all && job.last_inputs_hash && dependencies != nullptr) {
-      const io::TextFile text = io::read_text_file(file, read_options.limits.max_file_bytes);
-      if (text.text && hasher.inputs_hash(*text.text, *dependencies) == *job.last_inputs_hash &&
+      const std::optional<std::string> bytes = file_bytes(file, read_options.limits.max_file_bytes);
+      if (bytes && hasher.inputs_hash(*bytes, *dependencies) == *job.last_inputs_hash &&
           writer.claim(it->second.structure_id, file)) {
         unchanged.push_back(it->second.structure_id);
         continue;
