@@ -251,7 +251,9 @@ class RateCommand final : public Command {
         ->capture_default_str();
     sub->add_flag("--all", all_, "Rate every bridge, also those unchanged since their last rating");
     sub->add_option("--shard", shard_, "Rate shard K of N only (K from 0, as SLURM_ARRAY_TASK_ID)");
-    sub->add_option("--batch", batch_, "Label shared by the shard runs of one night (e.g. the array job id)");
+    sub->add_option("--batch", batch_,
+                    "Label shared by the shard runs of one night (e.g. the array job id; default with --shard: "
+                    "<date>-of-<N>)");
     sub->add_option("--ledger", ledger_, "Ledger file (default <out>/ledger.sqlite, per shard with --shard)");
     sub->add_option("--bridge", bridge_id_, "Rate only the bridge with this structure id, and say what changed");
     sub->add_option("--date", date_, "Rating date YYYY-MM-DD (default: today, UTC)");
@@ -296,6 +298,13 @@ class RateCommand final : public Command {
     info.command = command_line();
     info.shard = shard ? shard->to_string() : "";
     info.batch = batch_;
+    // Shard runs are joined by their batch label when merged; without one
+    // each shard would stay a run of its own. The rating date and shard
+    // count tie together the shards of one night's array by default.
+    if (shard && info.batch.empty()) {
+      info.batch = fmt::format("{}-of-{}", rating_date.to_iso(), shard->count);
+      spdlog::info("--shard without --batch: batch label '{}'", info.batch);
+    }
     const int status = bridge_id_.empty() ? rate_inventory(ledger, ledger_path, files, info, rating_date, shard)
                                           : rate_one(ledger, ledger_path, listing.files, info, rating_date);
     return status == kExitOk && has_errors(listing.diagnostics) ? kExitFindings : status;

@@ -80,7 +80,7 @@ void RunProgress::show(const batch::BatchProgress& progress, bool final) {
     const std::string bar = std::string(static_cast<std::size_t>(filled), '#') +
                             std::string(static_cast<std::size_t>(kWidth - filled), '.');
     std::fprintf(out_, "\r\033[K[%s] %d/%d  %s  %.1f/s  %s", bar.c_str(), progress.done(), progress.total,
-                 counts.c_str(), rate, final ? duration_text(seconds).c_str() : left.c_str());
+                 counts.c_str(), rate, final ? ("done in " + duration_text(seconds)).c_str() : left.c_str());
     bar_shown_ = true;
   } else {
     last_logged_done_ = progress.done();
