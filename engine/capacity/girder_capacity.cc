@@ -1,9 +1,12 @@
 #include "engine/capacity/girder_capacity.h"
 
 #include <algorithm>
+#include <bit>
 #include <cassert>
 #include <cmath>
 #include <type_traits>
+#include <utility>
+#include <variant>
 
 #include <fmt/format.h>
 
@@ -52,6 +55,15 @@ struct GirderCapacity::State {
   std::string label;
   std::optional<section::SectionStages> described;  // from the (reduced) description: geometry
   std::optional<section::SectionStages> analysis;   // stage moduli for stresses
+};
+
+// What shear() needs before the demand: the state, and for a concrete
+// description the member sections for the moment sign and the flexural
+// calculation giving dv (LRFD) or d (LFR, RC).
+struct GirderCapacity::ShearBasis {
+  State state;
+  std::optional<ConcreteMemberSections> member;
+  std::optional<ConcreteFlexure> flexure;
 };
 
 GirderCapacity::GirderCapacity(const model::Bridge& bridge, const model::GirderLine& girder,
@@ -252,20 +264,44 @@ Resistance GirderCapacity::flexure(Real station, MomentSign sign, section::Side 
   return r;
 }
 
+const GirderCapacity::ShearBasis& GirderCapacity::shear_basis(Real station, section::Side side, MomentSign sign) const {
+  // Exact key: the bit pattern, so that neither a nearby station nor -0.0
+  // for 0.0 (which would print differently in the label) can match.
+  const ShearKey key{std::bit_cast<std::uint64_t>(station), static_cast<int>(side), static_cast<int>(sign)};
+  if (const auto it = shear_memo_.find(key); it != shear_memo_.end()) return *it->second;
+  auto basis = std::make_shared<ShearBasis>();
+  basis->state = state_at(station, side);
+  const model::SectionDefinition& section = basis->state.deteriorated.section;
+  if (section.description && !std::holds_alternative<model::SteelIGirder>(*section.description)) {
+    const bool rc = std::holds_alternative<model::ReinforcedConcreteBeam>(*section.description);
+    basis->member = rc ? reinforced_concrete_sections(section, materials_, sign, options_.density_factor, source_file_)
+                       : prestressed_sections(section, materials_, sign, options_.density_factor, source_file_);
+    // d for Standard Specifications 8.16.6 from 8.16.3 (LFR, RC); else dv
+    // from the LRFD flexural calculation (5.7.2.8).
+    basis->flexure = method_ == model::RatingMethod::lfr && rc
+                         ? lfr_concrete_flexure(basis->member->flexure)
+                         : concrete_flexure(basis->member->flexure, options_.resistance);
+  }
+  // Inserted only once complete: a builder that throws leaves no entry, so
+  // the next call throws the same error.
+  return *shear_memo_.emplace(key, std::move(basis)).first->second;
+}
+
 Resistance GirderCapacity::shear(Real station, section::Side side, const std::optional<ShearDemand>& demand,
                                  MomentSign sign) const {
   if (capacity_.mode == model::CapacitySource::given) {
     return given_resistance(capacity_.given, girder_.id, station, side, model::ForceEffect::shear, MomentSign::positive,
                             losses_here(station, side));
   }
-  const State s = state_at(station, side);
+  if (demand) sign = demand->moment < 0 ? MomentSign::negative : MomentSign::positive;
+  const ShearBasis& basis = shear_basis(station, side, sign);
+  const State& s = basis.state;
   if (!s.deteriorated.section.description) {
     Resistance r = Resistance::unavailable_because(fmt::format(
         "{}: the section has no description, so its shear capacity cannot be computed; give capacity.given", s.label));
     finish(r, s);
     return r;
   }
-  if (demand) sign = demand->moment < 0 ? MomentSign::negative : MomentSign::positive;
   Resistance r = std::visit(
       [&](const auto& d) -> Resistance {
         using T = std::decay_t<decltype(d)>;
@@ -291,15 +327,10 @@ Resistance GirderCapacity::shear(Real station, section::Side side, const std::op
           if (in.end_panel) out.trace.add_note("end panel: within one stiffener spacing of a girder end");
           return out;
         } else {
-          const ConcreteMemberSections member =
-              std::is_same_v<T, model::ReinforcedConcreteBeam>
-                  ? reinforced_concrete_sections(s.deteriorated.section, materials_, sign, options_.density_factor,
-                                                 source_file_)
-                  : prestressed_sections(s.deteriorated.section, materials_, sign, options_.density_factor,
-                                         source_file_);
+          const ConcreteMemberSections& member = *basis.member;
+          const ConcreteFlexure& f = *basis.flexure;
           if (method_ == model::RatingMethod::lfr && std::is_same_v<T, model::ReinforcedConcreteBeam>) {
             // Standard Specifications 8.16.6 with d from 8.16.3.
-            const ConcreteFlexure f = lfr_concrete_flexure(member.flexure);
             if (!f.resistance.available()) {
               return Resistance::unavailable_because(
                   fmt::format("{}: d for Standard Specifications 8.16.6 needs the flexural calculation, which "
@@ -310,7 +341,6 @@ Resistance GirderCapacity::shear(Real station, section::Side side, const std::op
             out.trace.add_note(fmt::format("d from the {} moment flexural calculation", to_string(sign)));
             return out;
           }
-          const ConcreteFlexure f = concrete_flexure(member.flexure, options_.resistance);
           if (!f.resistance.available()) {
             return Resistance::unavailable_because(
                 fmt::format("{}: dv (AASHTO LRFD 5.7.2.8) needs the flexural calculation, which failed: {}", s.label,

@@ -43,14 +43,29 @@
 // and prestressed shear keep the LRFD resistance with a warning saying so.
 //
 // Units internal SI: stations m, moments N*m (magnitudes), shears N.
+//
+// Shear memo: the rating asks for shear at each point about 2,600 times per
+// girder line (load model x level x point x side x extreme), and only the
+// demand (Mu, Vu) differs between those calls. shear() therefore keeps, per
+// exact (station bit pattern, side, moment sign), the section state and the
+// demand-independent concrete parts (member sections, and the flexural
+// calculation that gives dv or d), so a repeated call only redoes the Vc/Vs
+// step of LRFD 5.7.3.4.1/5.7.3.4.2 (or 8.16.6). Nothing is matched
+// approximately, so the results are those of a fresh object. The memo is
+// `mutable` and unsynchronised: a GirderCapacity is used by one thread at a
+// time (rate_bridge makes one per girder line). Copies share no mutable data.
+//
 // Throws InputError for invalid options, segments that do not resolve
 // (as GirderSectionProfile), missing materials, bad dimensions and bad loss
 // records, each naming the field.
 #pragma once
 
+#include <cstdint>
+#include <map>
 #include <memory>
 #include <optional>
 #include <string>
+#include <tuple>
 #include <vector>
 
 #include "engine/capacity/capacity_options.h"
@@ -105,7 +120,10 @@ class GirderCapacity {
 
  private:
   struct State;
+  struct ShearBasis;
   [[nodiscard]] State state_at(Real station, section::Side side) const;
+  // The memoised demand-independent part of shear() (see "Shear memo").
+  [[nodiscard]] const ShearBasis& shear_basis(Real station, section::Side side, MomentSign sign) const;
   [[nodiscard]] std::vector<model::SectionLoss> losses_here(Real station, section::Side side) const;
   [[nodiscard]] Resistance steel_flexure(const State& state, MomentSign sign, Real station, section::Side side) const;
   void finish(Resistance& r, const State& state) const;
@@ -122,6 +140,10 @@ class GirderCapacity {
   std::vector<Real> boundaries_;                                         // segment stations
   std::vector<std::shared_ptr<const section::TaperedSection>> tapered_;  // per segment; null when prismatic
   std::vector<Real> brace_points_;
+  // Key: the station's bit pattern, side and moment sign. Entries are
+  // immutable once made; shared_ptr keeps the class copyable.
+  using ShearKey = std::tuple<std::uint64_t, int, int>;
+  mutable std::map<ShearKey, std::shared_ptr<const ShearBasis>> shear_memo_;
 };
 
 }  // namespace tenthpoint::capacity
