@@ -96,7 +96,10 @@ BridgeOutcome run_bridge_job(const BridgeJob& job, const JobContext& context) {
     results_context.source_file = job.file;
     results_context.run_id = context.run;
     results_context.run_time = context.run_started;
-    outcome.results_json = report::results_document(bridge, rating, results_context).dump(1) + "\n";
+    // Compact, without indentation: fewer bytes and less time at nightly scale
+    // (tools/bench_batch/NOTES.md, "results.json"); a reader who wants it
+    // indented runs a formatter.
+    outcome.results_json = report::results_document(bridge, rating, results_context).dump() + "\n";
     if (context.keep_rating) {
       outcome.rating = std::move(rating);
       outcome.bridge = std::move(read.bridge);

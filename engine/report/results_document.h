@@ -27,6 +27,11 @@
 // Every number in the document is finite: results_document throws
 // ModelError naming the bridge and the JSON path of the first NaN or
 // infinity (see finite_numbers.h).
+//
+// Floating-point numbers are rounded to kResultsSignificantDigits
+// significant digits, except in "governing" and "postings", which keep the
+// rating factors, weights and terms that the ledger and summary hold at full
+// precision.
 #pragma once
 
 #include <optional>
@@ -56,6 +61,16 @@ inline constexpr const char* kCaution =
 // Format identifier and version of results.json.
 inline constexpr const char* kResultsFormat = "tenthpoint-results";
 inline constexpr int kResultsFormatVersion = 1;
+
+// Significant digits of the rounded numbers of results.json. A rating
+// engineer reads six (RF 0.8297, 3194.52 kip-ft); the seventh is a guard
+// digit, so a value shown to six digits from the file is the value rounded
+// from the engine's own result (except at an exact tie). Seven digits is a
+// relative error of at most 5e-7, below the 1e-6 of the largest ordinate to
+// which the influence lines are exact (DEVELOPERS.md, "Exact influence
+// lines"), so no digit dropped carries information. A 17-digit number is
+// 20 to 24 bytes of text, a 7-digit one at most 14.
+inline constexpr int kResultsSignificantDigits = 7;
 
 // `rating` must come from rate_bridge on `bridge` (its details fill the
 // girder sections; a rating without details gives girders without points,

@@ -121,7 +121,10 @@ TEST_CASE("a full run rates every demo bridge into the ledger and writes a valid
     CHECK_FALSE(r.governing.empty());
     const fs::path results = s.out / r.structure_id / "results.json";
     REQUIRE(fs::exists(results));
-    const nlohmann::json document = nlohmann::json::parse(slurp(results));
+    const std::string text = slurp(results);
+    // Written compact, on one line (no indentation), with a final newline.
+    CHECK(text.find('\n') == text.size() - 1);
+    const nlohmann::json document = nlohmann::json::parse(text);
     CHECK(tenthpoint::test::schema_violations(document, "results.schema.json") == "");
     CHECK(document.dump().find(r.inputs_hash) != std::string::npos);
   }
