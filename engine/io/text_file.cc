@@ -1,5 +1,6 @@
 #include "engine/io/text_file.h"
 
+#include <array>
 #include <filesystem>
 #include <fstream>
 #include <system_error>
@@ -91,12 +92,16 @@ TextFile read_text_file(const std::string& path, std::size_t max_bytes) {
     result.diagnostics.push_back(file_error(path, "cannot open the file for reading"));
     return result;
   }
-  // Read at most max_bytes + 1 so a file that grows (or a device that never
-  // ends) is still caught by the limit.
+  // Read in chunks up to just past max_bytes, so a file that grows (or a
+  // device that never ends) is still caught by the limit, without filling a
+  // max_bytes buffer for every small bridge file of a nightly run.
   std::string text;
-  text.resize(max_bytes + 1);
-  in.read(text.data(), static_cast<std::streamsize>(text.size()));
-  text.resize(static_cast<std::size_t>(in.gcount()));
+  if (!ec) text.reserve(static_cast<std::size_t>(size));
+  std::array<char, 64 * 1024> chunk{};
+  while (in && text.size() <= max_bytes) {
+    in.read(chunk.data(), static_cast<std::streamsize>(chunk.size()));
+    text.append(chunk.data(), static_cast<std::size_t>(in.gcount()));
+  }
   if (text.size() > max_bytes) {
     result.diagnostics.push_back(file_error(path, fmt::format("file is too large (more than {} bytes)", max_bytes)));
     return result;
